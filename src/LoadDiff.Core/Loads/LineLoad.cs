@@ -1,0 +1,93 @@
+namespace LoadDiff.Core.Loads;
+
+/// <summary>
+/// A line load on the straight segment <paramref name="From"/> → <paramref name="To"/> whose intensity
+/// (force per unit length of the segment, a vector) varies linearly from <paramref name="StartIntensity"/>
+/// to <paramref name="EndIntensity"/>.
+/// </summary>
+/// <param name="Id">Identifier within the case.</param>
+/// <param name="From">Start point A (length units).</param>
+/// <param name="To">End point B (length units); must differ from A.</param>
+/// <param name="StartIntensity">Intensity w1 at A (force per length).</param>
+/// <param name="EndIntensity">Intensity w2 at B (force per length).</param>
+public sealed record LineLoad(string Id, Vector3 From, Vector3 To, Vector3 StartIntensity, Vector3 EndIntensity) : LoadItem(Id)
+{
+    /// <inheritdoc/>
+    public override LoadKind Kind => LoadKind.Line;
+
+    /// <summary>Length of the segment.</summary>
+    public double Length => (To - From).Length;
+
+    /// <summary>
+    /// Closed form about P: R = L(w1+w2)/2, M_P = L[(A−P)×(w1+w2)/2 + (B−A)×(w1/6 + w2/3)].
+    /// </summary>
+    public override Contribution ContributionAbout(Vector3 point)
+    {
+        Vector3 a = From - point;
+        Vector3 ab = To - From;
+        double l = ab.Length;
+        Vector3 half = (StartIntensity + EndIntensity) * 0.5;
+        Vector3 force = half * l;
+        Vector3 moment = (Vector3.Cross(a, half) + Vector3.Cross(ab, (StartIntensity / 6) + (EndIntensity / 3))) * l;
+        (double i0, double i1) = NormIntegrals(StartIntensity, EndIntensity - StartIntensity);
+        double gross = l * i0;
+        Vector3 first = ((a * i0) + (ab * i1)) * l;
+        return new Contribution(force, moment, gross, first, 0);
+    }
+
+    /// <inheritdoc/>
+    public override void VisitGeometry(Action<Vector3> visit)
+    {
+        Guard.NotNull(visit);
+        visit(From);
+        visit(To);
+    }
+
+    internal override bool IsParallelTo(Vector3 direction, double relativeTolerance) =>
+        Parallel(StartIntensity, direction, relativeTolerance) && Parallel(EndIntensity, direction, relativeTolerance);
+
+    internal override Vector3 ForceDirection => StartIntensity + EndIntensity;
+
+    /// <summary>
+    /// I0 = ∫₀¹ |a + t b| dt and I1 = ∫₀¹ t |a + t b| dt in closed form. Parallel intensities (the usual case)
+    /// are integrated piecewise-linearly, split where the intensity changes sign; otherwise the
+    /// square root of a quadratic is integrated with asinh.
+    /// </summary>
+    internal static (double I0, double I1) NormIntegrals(Vector3 a, Vector3 b)
+    {
+        Vector3 end = a + b;
+        double na = a.Length, nb = b.Length, ne = end.Length;
+        if (nb == 0)
+        {
+            return (na, na / 2);
+        }
+        Vector3 cross = Vector3.Cross(a, b);
+        if (cross.Length <= 1e-14 * na * nb || na == 0 || ne == 0)
+        {
+            Vector3 e = (na >= ne ? a : end).Normalize();
+            double s0 = Vector3.Dot(a, e), s1 = Vector3.Dot(end, e);
+            if (s0 * s1 >= 0)
+            {
+                double p = Math.Abs(s0), q = Math.Abs(s1);
+                return ((p + q) / 2, (p + (2 * q)) / 6);
+            }
+            double t = s0 / (s0 - s1);
+            double m0 = Math.Abs(s0), m1 = Math.Abs(s1);
+            return (((m0 * t) + (m1 * (1 - t))) / 2, ((m0 * t * t) + (m1 * (1 - t) * (2 + t))) / 6);
+        }
+        double alpha = b.LengthSquared;
+        double beta = Vector3.Dot(a, b);
+        double k = cross.Length / alpha;
+        double u0 = beta / alpha, u1 = u0 + 1;
+        double i0 = Math.Sqrt(alpha) * (Primitive(u1, k) - Primitive(u0, k));
+        double i1 = ((ne * ne * ne) - (na * na * na)) / (3 * alpha) - (u0 * i0);
+        return (i0, i1);
+    }
+
+    // ∫ sqrt(u² + k²) du = (u·sqrt(u² + k²) + k²·asinh(u/k)) / 2, k > 0
+    private static double Primitive(double u, double k) =>
+        ((u * Math.Sqrt((u * u) + (k * k))) + (k * k * Math.Asinh(u / k))) / 2;
+
+    /// <inheritdoc/>
+    public override string ToString() => $"line {Id} {From} → {To}: {StartIntensity} → {EndIntensity}";
+}

@@ -1,0 +1,27 @@
+namespace LoadDiff.Core.Loads;
+
+/// <summary>One load of a load case. Positions are in length units, global axes; forces in force units.</summary>
+/// <param name="Id">Identifier, unique within its case; the diff matches on it.</param>
+public abstract record LoadItem(string Id)
+{
+    /// <summary>The kind of this item.</summary>
+    public abstract LoadKind Kind { get; }
+
+    /// <summary>The exact (closed-form) contribution of this item to a reduction about <paramref name="point"/>.</summary>
+    public abstract Contribution ContributionAbout(Vector3 point);
+
+    /// <summary>Calls <paramref name="visit"/> for every point that bounds this item's geometry (none for a couple).</summary>
+    public abstract void VisitGeometry(Action<Vector3> visit);
+
+    /// <summary>True when every force this item applies has the same line direction as <paramref name="direction"/> (unit vector).</summary>
+    internal abstract bool IsParallelTo(Vector3 direction, double relativeTolerance);
+
+    /// <summary>A representative direction of the force this item applies, or zero for couples and zero loads.</summary>
+    internal abstract Vector3 ForceDirection { get; }
+
+    internal static bool Parallel(Vector3 v, Vector3 unit, double rel)
+    {
+        double n = v.Length;
+        return n == 0 || Vector3.Cross(v, unit).Length <= rel * n;
+    }
+}

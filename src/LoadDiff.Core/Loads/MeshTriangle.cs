@@ -1,0 +1,49 @@
+namespace LoadDiff.Core.Loads;
+
+/// <summary>
+/// One triangle of a pressure map with the pressure given at each vertex and varying linearly between them.
+/// The force per unit area is p·n̂ (right-hand rule of A, B, C) or p·d̂ for a given <paramref name="Direction"/>.
+/// </summary>
+/// <param name="Id">Identifier of the mesh this triangle belongs to.</param>
+/// <param name="A">First vertex (length units).</param>
+/// <param name="B">Second vertex.</param>
+/// <param name="C">Third vertex.</param>
+/// <param name="PressureA">Pressure at A (force per area).</param>
+/// <param name="PressureB">Pressure at B.</param>
+/// <param name="PressureC">Pressure at C.</param>
+/// <param name="Direction">Direction of the force, normalised on use; null for the triangle normal.</param>
+public sealed record MeshTriangle(
+    string Id, Vector3 A, Vector3 B, Vector3 C, double PressureA, double PressureB, double PressureC, Vector3? Direction)
+    : LoadItem(Id)
+{
+    /// <inheritdoc/>
+    public override LoadKind Kind => LoadKind.MeshTriangle;
+
+    /// <inheritdoc/>
+    public override Contribution ContributionAbout(Vector3 point)
+    {
+        Vector3 a = A - point, b = B - point, c = C - point;
+        Vector3 areaVector = Vector3.Cross(b - a, c - a) * 0.5;
+        double area = areaVector.Length;
+        Vector3 u = Direction is { } d ? d.Normalize() : areaVector / area;
+        (double t, Vector3 f) = TriangleIntegrals.Of(area, a, b, c, PressureA, PressureB, PressureC);
+        (double g, Vector3 gf) = TriangleIntegrals.OfAbsolute(area, a, b, c, PressureA, PressureB, PressureC);
+        return new Contribution(u * t, Vector3.Cross(f, u), g, gf, 0);
+    }
+
+    /// <inheritdoc/>
+    public override void VisitGeometry(Action<Vector3> visit)
+    {
+        Guard.NotNull(visit);
+        visit(A);
+        visit(B);
+        visit(C);
+    }
+
+    internal override bool IsParallelTo(Vector3 direction, double relativeTolerance) => Parallel(ForceDirection, direction, relativeTolerance);
+
+    internal override Vector3 ForceDirection => Direction ?? Vector3.Cross(B - A, C - A);
+
+    /// <inheritdoc/>
+    public override string ToString() => $"mesh triangle {Id} {A} {B} {C}";
+}

@@ -1,0 +1,72 @@
+using LoadDiff.Core.Loads;
+using LoadDiff.Core.Reduction;
+
+namespace LoadDiff.Core.Model;
+
+/// <summary>A sink that reduces each case as its items arrive (one accumulator per case) and keeps the combinations.</summary>
+public sealed class ReductionSink : ILoadSink
+{
+    private readonly Dictionary<string, ReductionAccumulator> _cases = new(StringComparer.Ordinal);
+    private readonly List<string> _caseOrder = [];
+    private readonly Dictionary<string, string?> _titles = new(StringComparer.Ordinal);
+    private readonly List<LoadCombination> _combinations = [];
+    private readonly Func<string, bool>? _caseFilter;
+    private ReductionAccumulator? _current;
+
+    /// <summary>Creates a sink; items of cases for which <paramref name="caseFilter"/> is false are skipped.</summary>
+    public ReductionSink(Func<string, bool>? caseFilter = null)
+    {
+        _caseFilter = caseFilter;
+    }
+
+    /// <summary>The header, once read.</summary>
+    public DocumentHeader? DocumentHeader { get; private set; }
+
+    /// <summary>Case names in file order.</summary>
+    public IReadOnlyList<string> CaseNames => _caseOrder;
+
+    /// <summary>Accumulators by case name.</summary>
+    public IReadOnlyDictionary<string, ReductionAccumulator> Cases => _cases;
+
+    /// <summary>Combinations in file order.</summary>
+    public IReadOnlyList<LoadCombination> Combinations => _combinations;
+
+    /// <summary>The title of a case, if it has one.</summary>
+    public string? CaseTitle(string name) => _titles.GetValueOrDefault(name);
+
+    /// <summary>All cases together, for the document's load centroid and bounding box.</summary>
+    public ReductionAccumulator AllCases()
+    {
+        var all = new ReductionAccumulator();
+        foreach (string name in _caseOrder)
+        {
+            all.AddScaled(_cases[name], 1);
+        }
+        return all;
+    }
+
+    /// <inheritdoc/>
+    public void Header(DocumentHeader header) => DocumentHeader = header;
+
+    /// <inheritdoc/>
+    public void BeginCase(string name, string? title)
+    {
+        _current = new ReductionAccumulator();
+        _cases[name] = _current;
+        _caseOrder.Add(name);
+        _titles[name] = title;
+        if (_caseFilter is not null && !_caseFilter(name))
+        {
+            _current = null;
+        }
+    }
+
+    /// <inheritdoc/>
+    public void Item(LoadItem item) => _current?.Add(item);
+
+    /// <inheritdoc/>
+    public void EndCase() => _current = null;
+
+    /// <inheritdoc/>
+    public void Combination(LoadCombination combination) => _combinations.Add(combination);
+}

@@ -1,0 +1,171 @@
+using LoadDiff.Core.Loads;
+
+namespace LoadDiff.Core.Reduction;
+
+/// <summary>
+/// Accumulates load items one at a time into a force-couple system, in double-double arithmetic, with
+/// moments taken about an anchor point near the loads (the first located item unless given) so that
+/// coordinates far from the origin cost no accuracy. Memory is constant in the number of items.
+/// </summary>
+public sealed class ReductionAccumulator
+{
+    // Forces whose direction differs from the first by more than this (relative) make the system non-parallel.
+    private const double ParallelTolerance = 1e-9;
+
+    private readonly VectorSum _force = new();
+    private readonly VectorSum _moment = new();
+    private readonly VectorSum _grossFirst = new();
+    private DoubleDouble _gross;
+    private DoubleDouble _grossCouple;
+    private Vector3 _min;
+    private Vector3 _max;
+    private bool _hasBounds;
+    private Vector3 _direction;
+    private bool _parallel = true;
+
+    /// <summary>Creates an empty accumulator; moments are summed about <paramref name="anchor"/> when given.</summary>
+    public ReductionAccumulator(Vector3? anchor = null)
+    {
+        Anchor = anchor;
+    }
+
+    /// <summary>The point moments are accumulated about, once known.</summary>
+    public Vector3? Anchor { get; private set; }
+
+    /// <summary>Number of items added (mesh triangles count one each).</summary>
+    public long Count { get; private set; }
+
+    /// <summary>Adds one item's exact contribution.</summary>
+    public void Add(LoadItem item)
+    {
+        Guard.NotNull(item);
+        if (item is PointForce pf)
+        {
+            AddPointForce(pf.At, pf.Value);
+            return;
+        }
+        if (Anchor is null)
+        {
+            item.VisitGeometry(p => Anchor ??= p);
+        }
+        Contribution c = item.ContributionAbout(Anchor ?? Vector3.Zero);
+        _force.Add(c.Force);
+        _moment.Add(c.Moment);
+        _gross += c.GrossForce;
+        _grossFirst.Add(c.GrossFirstMoment);
+        _grossCouple += c.GrossCouple;
+        item.VisitGeometry(Extend);
+        TrackDirection(item.ForceDirection, item);
+        Count++;
+    }
+
+    /// <summary>Adds a concentrated force; the moment terms are formed exactly (FMA two-product).</summary>
+    public void AddPointForce(Vector3 at, Vector3 force)
+    {
+        Anchor ??= at;
+        Vector3 d = at - Anchor.Value;
+        _force.Add(force);
+        _moment.AddCross(d, force);
+        double g = force.Length;
+        _gross += g;
+        _grossFirst.Add(d * g);
+        Extend(at);
+        TrackDirection(force, null);
+        Count++;
+    }
+
+    /// <summary>Adds a free couple.</summary>
+    public void AddCouple(Vector3 couple)
+    {
+        _moment.Add(couple);
+        _grossCouple += couple.Length;
+        Count++;
+    }
+
+    /// <summary>Adds <paramref name="factor"/> times another accumulator (load combinations, parallel merging).</summary>
+    public void AddScaled(ReductionAccumulator other, double factor)
+    {
+        Guard.NotNull(other);
+        Guard.Finite(factor);
+        if (other.Count == 0)
+        {
+            return;
+        }
+        Anchor ??= other.Anchor;
+        _force.AddScaled(other._force, factor);
+        _moment.AddScaled(other._moment, factor);
+        double af = Math.Abs(factor);
+        _gross += other._gross * af;
+        _grossCouple += other._grossCouple * af;
+        _grossFirst.AddScaled(other._grossFirst, af);
+        if (other.Anchor is { } oa && Anchor is { } a && oa != a)
+        {
+            // M about a = M about oa + (oa − a) × R; the first moment of |F| moves the same way.
+            VectorSum f = new();
+            f.AddScaled(other._force, factor);
+            _moment.AddCross(oa - a, f);
+            _grossFirst.Add((oa - a) * (other._gross.Value * af));
+        }
+        if (other._hasBounds)
+        {
+            Extend(other._min);
+            Extend(other._max);
+        }
+        if (factor != 0)
+        {
+            if (!other._parallel)
+            {
+                _parallel = false;
+            }
+            else if (!other._direction.IsZero)
+            {
+                TrackDirection(other._direction, null);
+            }
+        }
+        Count += other.Count;
+    }
+
+    /// <summary>The reduction about <paramref name="point"/> (the moment transfer is done in double-double).</summary>
+    public LoadReduction ResultAt(Vector3 point)
+    {
+        Vector3 anchor = Anchor ?? point;
+        VectorSum moment = _moment.Clone();
+        moment.AddCross(anchor - point, _force);
+        double gross = _gross.Value;
+        Vector3? centroid = gross > 0 ? anchor + (_grossFirst.Value / gross) : null;
+        Box? box = _hasBounds ? new Box(_min, _max) : null;
+        return new LoadReduction(
+            new ForceCoupleSystem(_force.Value, moment.Value, point),
+            gross, _grossCouple.Value, centroid, box, _parallel && !_direction.IsZero, Count);
+    }
+
+    private void Extend(Vector3 p)
+    {
+        if (!_hasBounds)
+        {
+            _min = _max = p;
+            _hasBounds = true;
+            return;
+        }
+        _min = Vector3.Min(_min, p);
+        _max = Vector3.Max(_max, p);
+    }
+
+    private void TrackDirection(Vector3 f, LoadItem? item)
+    {
+        if (!_parallel || f.IsZero)
+        {
+            return;
+        }
+        if (_direction.IsZero)
+        {
+            _direction = f.Normalize();
+            if (item is not null && !item.IsParallelTo(_direction, ParallelTolerance))
+            {
+                _parallel = false;
+            }
+            return;
+        }
+        _parallel = item?.IsParallelTo(_direction, ParallelTolerance) ?? LoadItem.Parallel(f, _direction, ParallelTolerance);
+    }
+}

@@ -1,0 +1,57 @@
+namespace LoadDiff.Core;
+
+/// <summary>A double-double accumulator of 3-vectors. Mutable on purpose: it lives inside one reduction.</summary>
+internal sealed class VectorSum
+{
+    private DoubleDouble _x;
+    private DoubleDouble _y;
+    private DoubleDouble _z;
+
+    public void Add(Vector3 v)
+    {
+        _x += v.X;
+        _y += v.Y;
+        _z += v.Z;
+    }
+
+    public void Add(DoubleDouble x, DoubleDouble y, DoubleDouble z)
+    {
+        _x += x;
+        _y += y;
+        _z += z;
+    }
+
+    /// <summary>Adds d × f with every product formed exactly (FMA two-product).</summary>
+    public void AddCross(Vector3 d, Vector3 f)
+    {
+        _x = _x + DoubleDouble.TwoProduct(d.Y, f.Z) + DoubleDouble.TwoProduct(-d.Z, f.Y);
+        _y = _y + DoubleDouble.TwoProduct(d.Z, f.X) + DoubleDouble.TwoProduct(-d.X, f.Z);
+        _z = _z + DoubleDouble.TwoProduct(d.X, f.Y) + DoubleDouble.TwoProduct(-d.Y, f.X);
+    }
+
+    /// <summary>Adds d × (the vector held by <paramref name="f"/>), using both parts of its components.</summary>
+    public void AddCross(Vector3 d, VectorSum f)
+    {
+        _x = _x + (f._z * d.Y) + (f._y * -d.Z);
+        _y = _y + (f._x * d.Z) + (f._z * -d.X);
+        _z = _z + (f._y * d.X) + (f._x * -d.Y);
+    }
+
+    public void AddScaled(VectorSum other, double factor)
+    {
+        _x += other._x * factor;
+        _y += other._y * factor;
+        _z += other._z * factor;
+    }
+
+    public VectorSum Clone()
+    {
+        var c = new VectorSum();
+        c._x = _x;
+        c._y = _y;
+        c._z = _z;
+        return c;
+    }
+
+    public Vector3 Value => Vector3.Create(_x.Value, _y.Value, _z.Value);
+}
