@@ -47,6 +47,20 @@ public sealed record LoadReduction(
         return GrossCouple + (GrossForce * reach);
     }
 
+    /// <summary>The size of coordinates involved: the largest distance of the geometry's box corners and the reference point from the origin, or the box diagonal.</summary>
+    public double LengthScale
+    {
+        get
+        {
+            double s = ReferencePoint.Length;
+            if (Bounds is { } b)
+            {
+                s = Math.Max(s, Math.Max(b.Diagonal, Math.Max(b.Min.Length, b.Max.Length)));
+            }
+            return s;
+        }
+    }
+
     /// <inheritdoc/>
     public override string ToString() => $"{System} ({ItemCount} items)";
 }

@@ -1,0 +1,57 @@
+using System.CommandLine;
+using LoadDiff.Cli.Commands;
+
+namespace LoadDiff.Cli;
+
+/// <summary>The command tree and the one place that turns failures into messages and exit codes.</summary>
+public static class LoadDiffApp
+{
+    /// <summary>Builds the root command with every subcommand.</summary>
+    public static RootCommand BuildRoot()
+    {
+        var root = new RootCommand(
+            "LoadDiff: proves that a substitute load set is statically equivalent to a detailed one (same resultant "
+            + "force and moment per load case and combination, within a stated tolerance).")
+        {
+            ReduceCommand.Build(),
+        };
+        return root;
+    }
+
+    /// <summary>Runs the tool: parse errors and input errors exit with 2 and one message each on <paramref name="error"/>.</summary>
+    public static int Run(string[] args, TextWriter output, TextWriter error)
+    {
+        ArgumentNullException.ThrowIfNull(output);
+        ArgumentNullException.ThrowIfNull(error);
+        RootCommand root = BuildRoot();
+        ParseResult parse = root.Parse(args);
+        if (parse.Errors.Count > 0)
+        {
+            foreach (var e in parse.Errors)
+            {
+                error.WriteLine("loaddiff: " + e.Message);
+            }
+            string command = parse.CommandResult.Command == root ? "" : " " + parse.CommandResult.Command.Name;
+            error.WriteLine($"Try 'loaddiff{command} --help'.");
+            return ExitCodes.InputError;
+        }
+        try
+        {
+            return parse.Invoke(new InvocationConfiguration { Output = output, Error = error, EnableDefaultExceptionHandler = false });
+        }
+        catch (InputFailureException)
+        {
+            return ExitCodes.InputError;
+        }
+        catch (UsageException e)
+        {
+            error.WriteLine("loaddiff: " + e.Message);
+            return ExitCodes.InputError;
+        }
+        catch (IOException e)
+        {
+            error.WriteLine("loaddiff: " + e.Message);
+            return ExitCodes.InputError;
+        }
+    }
+}

@@ -1,0 +1,34 @@
+using LoadDiff.Core.Units;
+
+namespace LoadDiff.Formats;
+
+/// <summary>How a load description is read.</summary>
+public sealed record ReadOptions
+{
+    /// <summary>Deliver items in these units (exact factor conversion); null keeps the file's own units.</summary>
+    public UnitSystem? TargetUnits { get; init; }
+
+    /// <summary>Units of a CSV file given directly (a CSV carries no units of its own); SI by default.</summary>
+    public UnitSystem CsvUnits { get; init; } = UnitSystem.Si;
+
+    /// <summary>Accept referenced files outside the model's folder (absolute paths or <c>..</c>).</summary>
+    public bool AllowOutside { get; init; }
+
+    /// <summary>Unknown fields are errors instead of warnings.</summary>
+    public bool Strict { get; init; }
+
+    /// <summary>Largest JSON file read, in bytes (the JSON is held in memory; large data belongs in CSV).</summary>
+    public long MaxJsonBytes { get; init; } = 512L * 1024 * 1024;
+
+    /// <summary>Largest CSV file read, in bytes (CSV is streamed).</summary>
+    public long MaxCsvBytes { get; init; } = 64L * 1024 * 1024 * 1024;
+
+    /// <summary>Deepest JSON nesting accepted.</summary>
+    public int MaxDepth { get; init; } = 64;
+
+    /// <summary>Most items accepted in one file, CSV rows and mesh triangles included.</summary>
+    public long MaxItems { get; init; } = 1_000_000_000;
+
+    /// <summary>Longest CSV line accepted, in characters.</summary>
+    public int MaxLineLength { get; init; } = 1 << 20;
+}

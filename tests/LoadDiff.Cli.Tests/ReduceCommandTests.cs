@@ -1,0 +1,71 @@
+using System.Text.Json;
+using LoadDiff.Cli.Tests.Support;
+
+namespace LoadDiff.Cli.Tests;
+
+public class ReduceCommandTests
+{
+    [Fact]
+    public void Reduce_of_the_demo_file_exits_0_and_states_the_reference_point_and_caution()
+    {
+        CliRun run = CliProcess.Run("reduce", CliProcess.Fixture("footbridge", "detailed.loads.json"));
+        Assert.True(run.ExitCode == 0, run.ToString());
+        Assert.Contains("Reference point:  (0, 0, 0) m (origin)", run.Stdout);
+        Assert.Contains("Saint-Venant", run.Stdout);
+        Assert.Equal("", run.Stderr);
+    }
+
+    [Fact]
+    public void Reduce_json_follows_the_documented_schema()
+    {
+        CliRun run = CliProcess.Run("reduce", CliProcess.Fixture("footbridge", "detailed.loads.json"), "--format", "json", "--case", "vehicle");
+        Assert.True(run.ExitCode == 0, run.ToString());
+        using JsonDocument doc = JsonDocument.Parse(run.Stdout);
+        JsonElement root = doc.RootElement;
+        Assert.Equal(1, root.GetProperty("schema_version").GetInt32());
+        Assert.Equal("kN", root.GetProperty("units").GetProperty("force").GetString());
+        Assert.Equal(3, root.GetProperty("reference_point").GetArrayLength());
+        JsonElement c = Assert.Single(root.GetProperty("cases").EnumerateArray());
+        foreach (string key in new[] { "name", "kind", "force", "moment", "gross_force", "pitch", "axis_point", "axis_direction", "single_force", "system" })
+        {
+            Assert.True(c.TryGetProperty(key, out _), "missing key " + key);
+        }
+        Assert.Equal("case", c.GetProperty("kind").GetString());
+        Assert.Equal("force", c.GetProperty("system").GetString());
+        Assert.True(c.GetProperty("single_force").GetBoolean());
+        // Hand check (statics of parallel forces): 2·20 + 2·10 kN wheels plus 800 kg × 9.80665 m/s² = 7.84532 kN.
+        double fz = c.GetProperty("force")[2].GetDouble();
+        Assert.Equal(-(60 + (0.8 * 9.80665)), fz, 12);
+        // Centre of parallel forces: x̄ = Σ F x / Σ F = (40·10.5 + 20·13.5 + 7.84532·12) / 67.84532.
+        double x = c.GetProperty("centre_of_parallel_forces")[0].GetDouble();
+        Assert.Equal(((40 * 10.5) + (20 * 13.5) + (7.84532 * 12)) / 67.84532, x, 12);
+    }
+
+    [Fact]
+    public void Reduce_with_an_unknown_case_exits_2_with_one_message()
+    {
+        CliRun run = CliProcess.Run("reduce", CliProcess.Fixture("footbridge", "detailed.loads.json"), "--case", "snow");
+        Assert.Equal(2, run.ExitCode);
+        string line = Assert.Single(run.StderrLines);
+        Assert.Contains("'snow'", line);
+        Assert.Contains("dead", line);
+        Assert.Equal("", run.Stdout);
+    }
+
+    [Fact]
+    public void A_parse_error_exits_2_not_1()
+    {
+        CliRun run = CliProcess.Run("reduce", CliProcess.Fixture("footbridge", "detailed.loads.json"), "--format", "yaml");
+        Assert.Equal(2, run.ExitCode);
+        Assert.DoesNotContain("   at ", run.Stderr);
+    }
+
+    [Fact]
+    public void Help_of_reduce_shows_an_example()
+    {
+        CliRun run = CliProcess.Run("reduce", "--help");
+        Assert.Equal(0, run.ExitCode);
+        Assert.Contains("Example:", run.Stdout);
+        Assert.Contains("--at", run.Stdout);
+    }
+}
