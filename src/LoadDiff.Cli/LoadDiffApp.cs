@@ -14,6 +14,7 @@ public static class LoadDiffApp
             + "force and moment per load case and combination, within a stated tolerance).")
         {
             ReduceCommand.Build(),
+            CheckCommand.Build(),
         };
         return root;
     }

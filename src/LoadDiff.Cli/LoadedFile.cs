@@ -30,9 +30,9 @@ public sealed class LoadedFile
     public UnitSystem Units => Header.Units;
 
     /// <summary>Reads and reduces a file; prints its warnings and, on failure, its error, then throws <see cref="InputFailureException"/>.</summary>
-    public static LoadedFile Read(string path, UnitSystem? targetUnits, TextWriter error)
+    public static LoadedFile Read(string path, UnitSystem? targetUnits, TextWriter error, int topContributors = 0)
     {
-        var sink = new ReductionSink();
+        var sink = new ReductionSink(topContributors: topContributors);
         ReadResult result = LoadFileReader.Read(path, sink, new ReadOptions { TargetUnits = targetUnits });
         foreach (Diagnostic d in result.Diagnostics)
         {

@@ -1,5 +1,6 @@
 using System.Text.Json;
 using LoadDiff.Core;
+using LoadDiff.Core.Model;
 using LoadDiff.Core.Reduction;
 
 namespace LoadDiff.Reports;

@@ -1,3 +1,4 @@
+using LoadDiff.Core.Model;
 using LoadDiff.Core.Reduction;
 
 namespace LoadDiff.Reports;

@@ -1,18 +1,9 @@
 using LoadDiff.Core;
+using LoadDiff.Core.Model;
 using LoadDiff.Core.Reduction;
 using LoadDiff.Core.Units;
 
 namespace LoadDiff.Reports;
-
-/// <summary>Whether an entry is a load case or a combination.</summary>
-public enum EntryKind
-{
-    /// <summary>A load case as given in the file.</summary>
-    Case,
-
-    /// <summary>A factored sum of load cases.</summary>
-    Combination,
-}
 
 /// <summary>One reduced load case or combination.</summary>
 /// <param name="Name">Case or combination name.</param>

@@ -1,4 +1,5 @@
 using System.Globalization;
+using LoadDiff.Core.Model;
 using LoadDiff.Core.Reduction;
 
 namespace LoadDiff.Reports;

@@ -1,5 +1,6 @@
 using System.CommandLine;
 using LoadDiff.Core;
+using LoadDiff.Core.Model;
 using LoadDiff.Core.Reduction;
 using LoadDiff.Core.Units;
 using LoadDiff.Reports;

@@ -10,14 +10,23 @@ public sealed class ReductionSink : ILoadSink
     private readonly List<string> _caseOrder = [];
     private readonly Dictionary<string, string?> _titles = new(StringComparer.Ordinal);
     private readonly List<LoadCombination> _combinations = [];
+    private readonly Dictionary<string, ContributorTracker> _contributors = new(StringComparer.Ordinal);
     private readonly Func<string, bool>? _caseFilter;
+    private readonly int _topContributors;
     private ReductionAccumulator? _current;
+    private ContributorTracker? _tracker;
 
     /// <summary>Creates a sink; items of cases for which <paramref name="caseFilter"/> is false are skipped.</summary>
-    public ReductionSink(Func<string, bool>? caseFilter = null)
+    /// <param name="caseFilter">Which cases to reduce; all when null.</param>
+    /// <param name="topContributors">How many of the largest items to keep per case (0 for none).</param>
+    public ReductionSink(Func<string, bool>? caseFilter = null, int topContributors = 0)
     {
         _caseFilter = caseFilter;
+        _topContributors = topContributors;
     }
+
+    /// <summary>The largest contributors of a case, when the sink was asked to keep them.</summary>
+    public ContributorTracker? Contributors(string caseName) => _contributors.GetValueOrDefault(caseName);
 
     /// <summary>The header, once read.</summary>
     public DocumentHeader? DocumentHeader { get; private set; }
@@ -55,17 +64,31 @@ public sealed class ReductionSink : ILoadSink
         _cases[name] = _current;
         _caseOrder.Add(name);
         _titles[name] = title;
+        _tracker = null;
         if (_caseFilter is not null && !_caseFilter(name))
         {
             _current = null;
         }
+        else if (_topContributors > 0)
+        {
+            _tracker = new ContributorTracker(_topContributors);
+            _contributors[name] = _tracker;
+        }
     }
 
     /// <inheritdoc/>
-    public void Item(LoadItem item) => _current?.Add(item);
+    public void Item(LoadItem item)
+    {
+        _current?.Add(item);
+        _tracker?.Offer(item);
+    }
 
     /// <inheritdoc/>
-    public void EndCase() => _current = null;
+    public void EndCase()
+    {
+        _current = null;
+        _tracker = null;
+    }
 
     /// <inheritdoc/>
     public void Combination(LoadCombination combination) => _combinations.Add(combination);

@@ -1,0 +1,27 @@
+namespace LoadDiff.Core.Equivalence;
+
+/// <summary>
+/// The tolerance of an equivalence check: pass iff |ΔR| ≤ max(F, rel·G_F) and |ΔM_Q| ≤ max(M, rel·G_M) at every
+/// corner Q of the bounding box of both systems' geometry.
+/// </summary>
+/// <param name="Relative">rel, a fraction of the gross magnitudes (default 1e-3: common practice, no published source).</param>
+/// <param name="Force">F, an absolute force tolerance (force units); 0 when not given.</param>
+/// <param name="Moment">M, an absolute moment tolerance (force × length); 0 when not given.</param>
+public sealed record ToleranceSpec(double Relative, double Force, double Moment)
+{
+    /// <summary>The default relative tolerance, 1e-3 of the gross magnitudes (common practice, no published source).</summary>
+    public const double DefaultRelative = 1e-3;
+
+    /// <summary>rel = 1e-3, no absolute tolerances.</summary>
+    public static ToleranceSpec Default { get; } = new(DefaultRelative, 0, 0);
+
+    /// <summary>Validates the numbers: finite and not negative.</summary>
+    /// <exception cref="ArgumentException">A value is negative, NaN or infinite.</exception>
+    public static ToleranceSpec Create(double relative, double force, double moment)
+    {
+        Guard.That(double.IsFinite(relative) && relative >= 0, "The relative tolerance must be a finite number ≥ 0.", nameof(relative));
+        Guard.That(double.IsFinite(force) && force >= 0, "The force tolerance must be a finite number ≥ 0.", nameof(force));
+        Guard.That(double.IsFinite(moment) && moment >= 0, "The moment tolerance must be a finite number ≥ 0.", nameof(moment));
+        return new ToleranceSpec(relative, force, moment);
+    }
+}
