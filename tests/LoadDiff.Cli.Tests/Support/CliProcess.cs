@@ -74,4 +74,7 @@ public static class CliProcess
     }
 
     public static CliRun Run(params string[] args) => Run(RepoRoot, null, null, args);
+
+    /// <summary>Runs in another working directory.</summary>
+    public static CliRun RunIn(string workingDirectory, params string[] args) => Run(workingDirectory, null, null, args);
 }
