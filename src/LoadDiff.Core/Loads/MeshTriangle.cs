@@ -20,14 +20,18 @@ public sealed record MeshTriangle(
     public override LoadKind Kind => LoadKind.MeshTriangle;
 
     /// <inheritdoc/>
-    public override Contribution ContributionAbout(Vector3 point)
+    public override Contribution ContributionAbout(Vector3 point) =>
+        Reduce(A, B, C, PressureA, PressureB, PressureC, Direction, point);
+
+    /// <summary>The exact contribution of a triangle with vertex pressures about <paramref name="point"/>, without building an item.</summary>
+    public static Contribution Reduce(Vector3 pa, Vector3 pb, Vector3 pc, double pressureA, double pressureB, double pressureC, Vector3? direction, Vector3 point)
     {
-        Vector3 a = A - point, b = B - point, c = C - point;
+        Vector3 a = pa - point, b = pb - point, c = pc - point;
         Vector3 areaVector = Vector3.Cross(b - a, c - a) * 0.5;
         double area = areaVector.Length;
-        Vector3 u = Direction is { } d ? d.Normalize() : areaVector / area;
-        (double t, Vector3 f) = TriangleIntegrals.Of(area, a, b, c, PressureA, PressureB, PressureC);
-        (double g, Vector3 gf) = TriangleIntegrals.OfAbsolute(area, a, b, c, PressureA, PressureB, PressureC);
+        Vector3 u = direction is { } d ? d.Normalize() : areaVector / area;
+        (double t, Vector3 f) = TriangleIntegrals.Of(area, a, b, c, pressureA, pressureB, pressureC);
+        (double g, Vector3 gf) = TriangleIntegrals.OfAbsolute(area, a, b, c, pressureA, pressureB, pressureC);
         return new Contribution(u * t, Vector3.Cross(f, u), g, gf, 0);
     }
 

@@ -4,7 +4,7 @@ using LoadDiff.Core.Reduction;
 namespace LoadDiff.Core.Model;
 
 /// <summary>A sink that reduces each case as its items arrive (one accumulator per case) and keeps the combinations.</summary>
-public sealed class ReductionSink : ILoadSink
+public sealed class ReductionSink : IReducedBlockSink
 {
     private readonly Dictionary<string, ReductionAccumulator> _cases = new(StringComparer.Ordinal);
     private readonly List<string> _caseOrder = [];
@@ -81,6 +81,21 @@ public sealed class ReductionSink : ILoadSink
     {
         _current?.Add(item);
         _tracker?.Offer(item);
+    }
+
+    /// <inheritdoc/>
+    public void AddReducedBlock(ReductionAccumulator block, IReadOnlyList<Contributor> largest)
+    {
+        Guard.NotNull(block);
+        Guard.NotNull(largest);
+        _current?.AddScaled(block, 1);
+        if (_tracker is not null)
+        {
+            foreach (Contributor c in largest)
+            {
+                _tracker.Offer(c);
+            }
+        }
     }
 
     /// <inheritdoc/>

@@ -61,6 +61,17 @@ public sealed class ContributorTracker
         _pendingParts++;
     }
 
+    /// <summary>Offers a contributor already summed elsewhere (a block of a file reduced in parallel).</summary>
+    public void Offer(Contributor contributor)
+    {
+        Guard.NotNull(contributor);
+        Flush();
+        Insert(contributor.Kind == LoadKind.Couple ? _couples : _forces, contributor);
+    }
+
+    /// <summary>True when a contributor of this magnitude would be kept among the forces now.</summary>
+    public bool WouldKeepForce(double magnitude) => _forces.Count < _capacity || magnitude > _forces[^1].Magnitude;
+
     /// <summary>The largest force contributors, largest first.</summary>
     public IReadOnlyList<Contributor> Forces
     {

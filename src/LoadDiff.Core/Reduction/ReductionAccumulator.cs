@@ -74,6 +74,22 @@ public sealed class ReductionAccumulator
         Count++;
     }
 
+    /// <summary>Adds one pressure-map triangle (see <see cref="MeshTriangle"/>) without building an item.</summary>
+    public void AddTriangle(Vector3 a, Vector3 b, Vector3 c, double pressureA, double pressureB, double pressureC, Vector3? direction)
+    {
+        Anchor ??= a;
+        Contribution k = MeshTriangle.Reduce(a, b, c, pressureA, pressureB, pressureC, direction, Anchor.Value);
+        _force.Add(k.Force);
+        _moment.Add(k.Moment);
+        _gross += k.GrossForce;
+        _grossFirst.Add(k.GrossFirstMoment);
+        Extend(a);
+        Extend(b);
+        Extend(c);
+        TrackDirection(direction ?? Vector3.Cross(b - a, c - a), null);
+        Count++;
+    }
+
     /// <summary>Adds a free couple.</summary>
     public void AddCouple(Vector3 couple)
     {
