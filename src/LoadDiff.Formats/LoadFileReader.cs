@@ -111,8 +111,8 @@ public static class LoadFileReader
         {
             long offset = e.ReaderLine is { } rl ? lines.OffsetOf(rl, e.ReaderBytePosition + (rl == 0 ? bom : 0)) : e.Offset + bom;
             var (l, c) = lines.Locate(offset);
-            throw e.TooDeep
-                ? Fail(Codes.TooDeep, $"JSON nesting deeper than {options.MaxDepth} levels", file, l, c)
+            throw e.TooDeep ? Fail(Codes.TooDeep, $"JSON nesting deeper than {options.MaxDepth} levels", file, l, c)
+                : e.InvalidText ? Fail(Codes.InvalidUtf8, e.Message, file, l, c)
                 : Fail(Codes.MalformedJson, "malformed JSON: " + e.Message, file, l, c);
         }
         catch (JsonDuplicateKey e)
