@@ -61,7 +61,8 @@ internal sealed class CsvLoadReader
                     ReadPointLoadRows(csv, idPrefix);
                     break;
                 case CsvLayouts.TriangleRows:
-                    ReadTriangleRowsBody(csv, idPrefix, null);
+                    // A mesh read on its own has no id in any file: give it a derived one (never an empty id).
+                    ReadTriangleRowsBody(csv, idPrefix.Length > 0 ? idPrefix : "~mesh", null);
                     break;
                 default:
                     throw csv.Fail(Codes.CsvUnknownLayout,
