@@ -144,6 +144,8 @@ internal sealed class JsonSyntaxError : Exception
         {
             message = message[..bar].TrimEnd(' ', '.', '|') + ".";
         }
+        // The reader quotes the offending text, which can run over a line break: a diagnostic is one line.
+        message = string.Join(' ', message.Split(['\r', '\n', '\t'], StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries));
         bool deep = message.Contains("depth", StringComparison.OrdinalIgnoreCase);
         return new JsonSyntaxError(message, e)
         {
