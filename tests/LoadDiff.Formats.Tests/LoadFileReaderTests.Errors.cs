@@ -153,10 +153,12 @@ public sealed partial class LoadFileReaderTests
             Assert.Equal(BitConverter.DoubleToInt64Bits(v[2]), BitConverter.DoubleToInt64Bits(f.At.Z));
             Assert.Equal(BitConverter.DoubleToInt64Bits(v[2]), BitConverter.DoubleToInt64Bits(f.Value.X));
 
-            string path = _folder.Write("gen.csv", $"x,y,z,fx,fy,fz\n{s0},{s1},{s2},{s2},{s0},{s1}\n");
+            string stem = "gen-" + Guid.NewGuid().ToString("N"); // samples run in parallel: one file each
+            string path = _folder.Write(stem + ".csv", $"x,y,z,fx,fy,fz\n{s0},{s1},{s2},{s2},{s0},{s1}\n");
             var csv = new CollectingSink();
-            Assert.True(LoadFileReader.Read(path, csv).Succeeded);
-            PointForce g = Assert.IsType<PointForce>(Assert.Single(csv.Case("gen").Items));
+            ReadResult rc = LoadFileReader.Read(path, csv);
+            Assert.True(rc.Succeeded, string.Join("\n", rc.Diagnostics));
+            PointForce g = Assert.IsType<PointForce>(Assert.Single(csv.Case(stem).Items));
             Assert.Equal(f.At, g.At);
             Assert.Equal(f.Value, g.Value);
         }, iter: 200);

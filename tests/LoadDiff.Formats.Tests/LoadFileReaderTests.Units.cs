@@ -14,7 +14,7 @@ public sealed partial class LoadFileReaderTests
     private const double Foot = 0.3048;              // m, NIST SP 811 (2008) Appendix B.8
     private const double Inch = 0.0254;              // m, NIST SP 811 (2008) Appendix B.8
     private static readonly double PoundForce = Pound * StandardGravity;   // N
-    private static readonly double KipInKilonewtons = 1000 * PoundForce / 1000;
+    private static readonly double KipInKilonewtons = 1000 * PoundForce / 1000; // 1000 lbf, in kN
 
     private static readonly UnitSystem KilonewtonMetre = new(UnitCatalog.Kilonewton, UnitCatalog.Metre, UnitCatalog.Kilogram);
 
