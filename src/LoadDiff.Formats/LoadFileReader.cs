@@ -85,14 +85,16 @@ public static class LoadFileReader
 
     private static ReadResult ReadJsonBytes(byte[] bytes, string file, string dir, ILoadSink sink, ReadOptions options, List<Diagnostic> warnings)
     {
-        var lines = new LineIndex(bytes);
-        ReadOnlySpan<byte> span = bytes;
-        int bom = span.StartsWith((ReadOnlySpan<byte>)[0xEF, 0xBB, 0xBF]) ? 3 : 0;
-        if (span.StartsWith((ReadOnlySpan<byte>)[0xFF, 0xFE]) || span.StartsWith((ReadOnlySpan<byte>)[0xFE, 0xFF]))
+        if (bytes.AsSpan().StartsWith((ReadOnlySpan<byte>)[0xFF, 0xFE]) || bytes.AsSpan().StartsWith((ReadOnlySpan<byte>)[0xFE, 0xFF]))
         {
             throw Fail(Codes.InvalidUtf8, "the file is UTF-16 encoded; load files must be UTF-8", file, 1, 1);
         }
-        if (span[bom..].Trim((ReadOnlySpan<byte>)[(byte)' ', (byte)'\t', (byte)'\r', (byte)'\n']).IsEmpty)
+
+        // Positions are counted after a UTF-8 byte-order mark, which no editor shows as a column.
+        byte[] text = bytes.AsSpan().StartsWith((ReadOnlySpan<byte>)[0xEF, 0xBB, 0xBF]) ? bytes[3..] : bytes;
+        var lines = new LineIndex(text);
+        ReadOnlySpan<byte> span = text;
+        if (span.Trim((ReadOnlySpan<byte>)[(byte)' ', (byte)'\t', (byte)'\r', (byte)'\n']).IsEmpty)
         {
             throw Fail(Codes.EmptyInput, "the file is empty; expected a JSON load description", file, 1, 1);
         }
@@ -100,31 +102,31 @@ public static class LoadFileReader
         if (bad >= 0)
         {
             var (l, c) = lines.Locate(bad);
-            throw Fail(Codes.InvalidUtf8, $"invalid UTF-8 byte 0x{bytes[bad]:X2}; load files must be UTF-8 text", file, l, c);
+            throw Fail(Codes.InvalidUtf8, $"invalid UTF-8 byte 0x{text[bad]:X2}; load files must be UTF-8 text", file, l, c);
         }
         JsonNode root;
         try
         {
-            root = JsonTreeParser.Parse(span[bom..], options.MaxDepth);
+            root = JsonTreeParser.Parse(span, options.MaxDepth);
         }
         catch (JsonSyntaxError e)
         {
-            long offset = e.ReaderLine is { } rl ? lines.OffsetOf(rl, e.ReaderBytePosition + (rl == 0 ? bom : 0)) : e.Offset + bom;
+            long offset = e.ReaderLine is { } rl ? lines.OffsetOf(rl, e.ReaderBytePosition) : e.Offset;
             var (l, c) = lines.Locate(offset);
-            throw e.TooDeep
-                ? Fail(Codes.TooDeep, $"JSON nesting deeper than {options.MaxDepth} levels", file, l, c)
+            throw e.TooDeep ? Fail(Codes.TooDeep, $"JSON nesting deeper than {options.MaxDepth} levels", file, l, c)
+                : e.InvalidText ? Fail(Codes.InvalidUtf8, e.Message, file, l, c)
                 : Fail(Codes.MalformedJson, "malformed JSON: " + e.Message, file, l, c);
         }
         catch (JsonDuplicateKey e)
         {
-            var (l, c) = lines.Locate(e.Offset + bom);
+            var (l, c) = lines.Locate(e.Offset);
             throw Fail(Codes.DuplicateKey, $"key '{e.Key}' appears twice in the same object", file, l, c);
         }
         catch (InvalidOperationException)
         {
             throw Fail(Codes.InvalidUtf8, "the file holds text that is not valid UTF-8", file, 1, 1);
         }
-        var walker = new LoadJsonWalker(file, bom == 0 ? lines : new LineIndex(bytes[bom..]), options, dir, warnings);
+        var walker = new LoadJsonWalker(file, lines, options, dir, warnings);
         DocumentHeader header = walker.Walk(root, sink);
         return new ReadResult(header, warnings);
     }

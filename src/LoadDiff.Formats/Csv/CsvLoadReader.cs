@@ -41,7 +41,7 @@ internal sealed class CsvLoadReader
         {
             var stream = new FileStream(path, FileMode.Open, FileAccess.Read, FileShare.Read, 1 << 16, FileOptions.SequentialScan);
             var text = new StreamReader(stream, new System.Text.UTF8Encoding(false, throwOnInvalidBytes: true), true, 1 << 16);
-            return new CsvRowReader(text, display, options.MaxLineLength);
+            return new CsvRowReader(text, display, options.MaxLineLength, path);
         }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException)
         {
@@ -61,7 +61,8 @@ internal sealed class CsvLoadReader
                     ReadPointLoadRows(csv, idPrefix);
                     break;
                 case CsvLayouts.TriangleRows:
-                    ReadTriangleRowsBody(csv, idPrefix, null);
+                    // A mesh read on its own has no id in any file: give it a derived one (never an empty id).
+                    ReadTriangleRowsBody(csv, idPrefix.Length > 0 ? idPrefix : "~mesh", null);
                     break;
                 default:
                     throw csv.Fail(Codes.CsvUnknownLayout,
@@ -203,7 +204,7 @@ internal sealed class CsvLoadReader
         }
         catch (System.Text.DecoderFallbackException)
         {
-            throw csv.Fail(Codes.InvalidUtf8, "the file is not valid UTF-8 text", null);
+            throw csv.InvalidUtf8();
         }
         catch (IOException e)
         {

@@ -16,11 +16,14 @@ internal sealed class CsvRowReader : IDisposable
     private readonly List<string> _fields = [];
     private readonly List<int> _starts = [];
 
-    public CsvRowReader(TextReader text, string file, int maxLineLength)
+    private readonly string? _sourcePath;
+
+    public CsvRowReader(TextReader text, string file, int maxLineLength, string? sourcePath = null)
     {
         _text = text;
         _file = file;
         _maxLine = maxLineLength;
+        _sourcePath = sourcePath;
     }
 
     public int Line { get; private set; }
@@ -97,7 +100,10 @@ internal sealed class CsvRowReader : IDisposable
         }
         if (!double.IsFinite(v))
         {
-            throw Fail(Codes.NotFinite, $"'{s}' in column '{Header[column]}' overflows a double", column);
+            // The invariant culture also parses the symbols NaN and Infinity; only a numeral (it has digits) overflows.
+            throw Fail(Codes.NotFinite, s.Any(char.IsAsciiDigit)
+                ? $"'{s}' in column '{Header[column]}' overflows a double"
+                : $"'{s}' in column '{Header[column]}' is not accepted: NaN and infinity are input errors", column);
         }
         if (Math.Abs(v) > Codes.MaxMagnitude)
         {
@@ -109,8 +115,81 @@ internal sealed class CsvRowReader : IDisposable
     public string Text(int column) => _fields[column].Trim();
 
     public InputError Fail(string code, string message, int? column) =>
-        new(new Diagnostic(code, Severity.Error, message,
-            new SourceLocation(_file, Line, column is { } c && c < _starts.Count ? _starts[c] + 1 : 1)));
+        new(new Diagnostic(code, Severity.Error, message, Line == 0
+            ? new SourceLocation(_file) // nothing read yet: the whole file is meant
+            : new SourceLocation(_file, Line, column is { } c && c < _starts.Count ? _starts[c] + 1 : 1)));
+
+    /// <summary>
+    /// The error for text that does not decode: the decoder fails a buffer ahead of the rows returned, so the
+    /// file is scanned again for the first invalid byte to name its line and column.
+    /// </summary>
+    public InputError InvalidUtf8()
+    {
+        const string message = "the file is not valid UTF-8 text";
+        (int Line, int Column)? at = null;
+        if (_sourcePath is not null)
+        {
+            try
+            {
+                using var s = new FileStream(_sourcePath, FileMode.Open, FileAccess.Read, FileShare.Read, 1 << 16, FileOptions.SequentialScan);
+                at = FirstInvalidUtf8(s);
+            }
+            catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+            {
+                at = null;
+            }
+        }
+        return new InputError(new Diagnostic(Codes.InvalidUtf8, Severity.Error, message, at is { } p
+            ? new SourceLocation(_file, p.Line, p.Column)
+            : new SourceLocation(_file)));
+    }
+
+    /// <summary>Line and column (UTF-16 units, as the row reader counts them) of the first invalid UTF-8 sequence, or null.</summary>
+    internal static (int Line, int Column)? FirstInvalidUtf8(Stream s)
+    {
+        byte[] buffer = new byte[1 << 16];
+        int carry = 0, line = 1, column = 1;
+        bool start = true;
+        while (true)
+        {
+            int n = s.Read(buffer, carry, buffer.Length - carry);
+            int length = carry + n;
+            int pos = 0;
+            if (start && length >= 3 && buffer[0] == 0xEF && buffer[1] == 0xBB && buffer[2] == 0xBF)
+            {
+                pos = 3; // the reader drops a byte-order mark
+            }
+            start = false;
+            while (pos < length)
+            {
+                var status = System.Text.Rune.DecodeFromUtf8(buffer.AsSpan(pos, length - pos), out System.Text.Rune rune, out int consumed);
+                if (status == System.Buffers.OperationStatus.NeedMoreData && n > 0)
+                {
+                    break;
+                }
+                if (status != System.Buffers.OperationStatus.Done)
+                {
+                    return (line, column);
+                }
+                if (rune.Value == '\n')
+                {
+                    line++;
+                    column = 1;
+                }
+                else
+                {
+                    column += rune.Utf16SequenceLength;
+                }
+                pos += consumed;
+            }
+            carry = length - pos;
+            Array.Copy(buffer, pos, buffer, 0, carry);
+            if (n == 0)
+            {
+                return null;
+            }
+        }
+    }
 
     public void Dispose() => _text.Dispose();
 

@@ -35,6 +35,22 @@ internal static class JsonTreeParser
         }
     }
 
+    // A \u escape of a lone surrogate is valid JSON grammar but not Unicode text; report it where it is.
+    private static string Text(ref Utf8JsonReader reader, long start)
+    {
+        try
+        {
+            return reader.GetString()!;
+        }
+        catch (InvalidOperationException)
+        {
+            throw new JsonSyntaxError("a \\u escape in this string encodes a lone UTF-16 surrogate, which is not Unicode text", start)
+            {
+                InvalidText = true,
+            };
+        }
+    }
+
     private static JsonNode ReadValue(ref Utf8JsonReader reader)
     {
         long start = reader.TokenStartIndex;
@@ -47,7 +63,7 @@ internal static class JsonTreeParser
                 while (reader.Read() && reader.TokenType != JsonTokenType.EndObject)
                 {
                     long keyOffset = reader.TokenStartIndex;
-                    string key = reader.GetString()!;
+                    string key = Text(ref reader, keyOffset);
                     if (!seen.Add(key))
                     {
                         throw new JsonDuplicateKey(key, keyOffset);
@@ -67,7 +83,7 @@ internal static class JsonTreeParser
                 return JsonNode.Array(start, elements);
             }
             case JsonTokenType.String:
-                return JsonNode.String(start, reader.GetString()!);
+                return JsonNode.String(start, Text(ref reader, start));
             case JsonTokenType.Number:
             {
                 string raw = System.Text.Encoding.UTF8.GetString(reader.ValueSpan);
@@ -117,6 +133,9 @@ internal sealed class JsonSyntaxError : Exception
 
     public bool TooDeep { get; private init; }
 
+    /// <summary>The JSON is well formed but a string in it is not Unicode text.</summary>
+    public bool InvalidText { get; init; }
+
     public static JsonSyntaxError From(JsonException e)
     {
         string message = e.Message;
@@ -125,6 +144,8 @@ internal sealed class JsonSyntaxError : Exception
         {
             message = message[..bar].TrimEnd(' ', '.', '|') + ".";
         }
+        // The reader quotes the offending text, which can run over a line break: a diagnostic is one line.
+        message = string.Join(' ', message.Split(['\r', '\n', '\t'], StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries));
         bool deep = message.Contains("depth", StringComparison.OrdinalIgnoreCase);
         return new JsonSyntaxError(message, e)
         {
