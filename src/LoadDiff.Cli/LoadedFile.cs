@@ -30,10 +30,15 @@ public sealed class LoadedFile
     public UnitSystem Units => Header.Units;
 
     /// <summary>Reads and reduces a file; prints its warnings and, on failure, its error, then throws <see cref="InputFailureException"/>.</summary>
-    public static LoadedFile Read(string path, UnitSystem? targetUnits, TextWriter error, int topContributors = 0)
+    public static LoadedFile Read(string path, UnitSystem? targetUnits, TextWriter error, int topContributors = 0, int threads = 0)
     {
         var sink = new ReductionSink(topContributors: topContributors);
-        ReadResult result = LoadFileReader.Read(path, sink, new ReadOptions { TargetUnits = targetUnits });
+        var options = new ReadOptions { TargetUnits = targetUnits };
+        if (threads > 0)
+        {
+            options = options with { Threads = threads };
+        }
+        ReadResult result = LoadFileReader.Read(path, sink, options);
         foreach (Diagnostic d in result.Diagnostics)
         {
             error.WriteLine(d.ToString());

@@ -71,6 +71,12 @@ public readonly struct Vector3 : IEquatable<Vector3>, IFormattable
     {
         get
         {
+            // Plain sqrt when the sum of squares neither overflows nor loses digits to underflow.
+            double sq = (_x * _x) + (_y * _y) + (_z * _z);
+            if (sq is > 1e-290 and < 1e290)
+            {
+                return Math.Sqrt(sq);
+            }
             double m = Math.Max(Math.Abs(_x), Math.Max(Math.Abs(_y), Math.Abs(_z)));
             if (m == 0)
             {

@@ -140,8 +140,15 @@ public static class LoadFileReader
         sink.Header(header);
         sink.BeginCase(name, null);
         long count = 0;
-        var reader = new CsvLoadReader(units, options, sink.Item, () => ++count);
-        reader.ReadAny(CsvLoadReader.Open(path, path, options), "");
+        if (sink is IReducedBlockSink bulk)
+        {
+            new BlockCsvReducer(path, options, units, options.Threads).Reduce(path, bulk, null, "", "~mesh", null, n => count += n);
+        }
+        else
+        {
+            var reader = new CsvLoadReader(units, options, sink.Item, () => ++count);
+            reader.ReadAny(CsvLoadReader.Open(path, path, options), "");
+        }
         sink.EndCase();
         return new ReadResult(header, warnings);
     }

@@ -29,6 +29,9 @@ public sealed record ReadOptions
     /// <summary>Most items accepted in one file, CSV rows and mesh triangles included.</summary>
     public long MaxItems { get; init; } = 1_000_000_000;
 
+    /// <summary>Threads that parse blocks of large CSV files (1 parses on the calling thread); the result does not depend on it.</summary>
+    public int Threads { get; init; } = Environment.ProcessorCount;
+
     /// <summary>Longest CSV line accepted, in characters.</summary>
     public int MaxLineLength { get; init; } = 1 << 20;
 }

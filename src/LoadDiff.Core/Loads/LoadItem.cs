@@ -21,7 +21,7 @@ public abstract record LoadItem(string Id)
 
     internal static bool Parallel(Vector3 v, Vector3 unit, double rel)
     {
-        double n = v.Length;
-        return n == 0 || Vector3.Cross(v, unit).Length <= rel * n;
+        double n2 = v.LengthSquared;
+        return n2 == 0 || Vector3.Cross(v, unit).LengthSquared <= rel * rel * n2;
     }
 }

@@ -41,16 +41,35 @@ internal sealed class BlockCsvReducer
     }
 
     /// <summary>The layout of a header, or null when it is neither kind this reducer handles.</summary>
-    private sealed record Layout(string Name, int[] Columns, int Id, int FieldCount, bool Moments);
+    private sealed record Layout(string Name, int[] Columns, int Id, int FieldCount, bool Moments, string[] Names);
 
     /// <summary>Reduces the whole file into the sink's current case; returns the number of items.</summary>
     /// <param name="path">File to read.</param>
     /// <param name="sink">Receives the reduced blocks.</param>
     /// <param name="expected">A layout name of <see cref="CsvLayouts"/>, or null to detect it.</param>
-    /// <param name="idPrefix">Prefix of the ids of point loads, or the id of the mesh.</param>
+    /// <param name="pointPrefix">Prefix of the ids of point loads ("" for none).</param>
+    /// <param name="meshId">The id of a mesh's triangles.</param>
     /// <param name="direction">Force direction of mesh triangles (null: the normal).</param>
     /// <param name="countItems">Adds a number of items to the file's count and returns the total.</param>
-    public void Reduce(string path, IReducedBlockSink sink, string? expected, string idPrefix, Vector3? direction, Func<long, long> countItems)
+    public void Reduce(string path, IReducedBlockSink sink, string? expected, string pointPrefix, string meshId, Vector3? direction, Func<long, long> countItems)
+    {
+        var info = new FileInfo(path);
+        if (info.Length > _options.MaxCsvBytes)
+        {
+            throw new InputError(new Diagnostic(Codes.FileTooLarge, Severity.Error,
+                $"file is {info.Length} bytes, more than the limit of {_options.MaxCsvBytes}", new SourceLocation(_display)));
+        }
+        try
+        {
+            ReduceFile(path, sink, expected, pointPrefix, meshId, direction, countItems);
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        {
+            throw new InputError(new Diagnostic(Codes.FileUnreadable, Severity.Error, "cannot read the file: " + e.Message, new SourceLocation(_display)));
+        }
+    }
+
+    private void ReduceFile(string path, IReducedBlockSink sink, string? expected, string pointPrefix, string meshId, Vector3? direction, Func<long, long> countItems)
     {
         using var stream = new FileStream(path, FileMode.Open, FileAccess.Read, FileShare.Read, 1, FileOptions.SequentialScan);
         int blockSize = Math.Max(BlockSize, (2 * _options.MaxLineLength) + 16);
@@ -58,6 +77,7 @@ internal sealed class BlockCsvReducer
         int carryLength = 0;
         bool eof = false;
         Layout layout = ReadHeader(stream, carry, ref carryLength, ref eof, expected);
+        string idPrefix = layout.Name == CsvLayouts.TriangleRows ? meshId : pointPrefix;
         long nextLine = 2;
         ReductionAccumulator? meshTotal = layout.Name == CsvLayouts.TriangleRows ? new ReductionAccumulator() : null;
         var pool = ArrayPool<byte>.Shared;
@@ -167,14 +187,18 @@ internal sealed class BlockCsvReducer
         }
         if (header.Trim().Length == 0)
         {
-            throw Fail(Codes.CsvNoHeader, "the CSV file is empty; expected a header row naming the columns", 1, 1);
+            // nothing read yet: the whole file is meant
+            throw new InputError(new Diagnostic(Codes.CsvNoHeader, Severity.Error,
+                "the CSV file is empty; expected a header row naming the columns", new SourceLocation(_display)));
         }
-        string[] names = header.Split(',').Select(h => h.Trim().Trim('"').ToLowerInvariant()).ToArray();
-        for (int i = 0; i < names.Length; i++)
+        string[] raw = header.Split(',');
+        string[] names = raw.Select(h => h.Trim().Trim('"').ToLowerInvariant()).ToArray();
+        for (int i = 0, column = 1; i < names.Length; column += raw[i].Length + 1, i++)
         {
             if (Array.IndexOf(names, names[i]) != i)
             {
-                throw Fail(Codes.CsvDuplicateColumn, $"column '{names[i]}' appears twice in the header", 1, 1);
+                int lead = raw[i].Length - raw[i].TrimStart().Length;
+                throw Fail(Codes.CsvDuplicateColumn, $"column '{names[i]}' appears twice in the header", 1, column + lead);
             }
         }
         int consumed = newline < 0 ? carryLength : newline + 1;
@@ -210,7 +234,7 @@ internal sealed class BlockCsvReducer
                 moments = true;
             }
         }
-        return new Layout(layout, [.. columns], Array.IndexOf(names, "id"), names.Length, moments);
+        return new Layout(layout, [.. columns], Array.IndexOf(names, "id"), names.Length, moments, names);
     }
 
     private readonly struct BlockResult
@@ -242,6 +266,13 @@ internal sealed class BlockCsvReducer
         long line = firstLine - 1;
         long items = 0;
         int pos = 0;
+        if (!System.Text.Unicode.Utf8.IsValid(data.AsSpan(0, length)))
+        {
+            int bad = FirstInvalid(data.AsSpan(0, length));
+            int lineStartOfBad = data.AsSpan(0, bad).LastIndexOf((byte)'\n') + 1;
+            return Error(Codes.InvalidUtf8, $"invalid UTF-8 byte 0x{data[bad]:X2}; CSV files must be UTF-8 text",
+                firstLine + data.AsSpan(0, bad).Count((byte)'\n'), Column(data, lineStartOfBad, bad - lineStartOfBad));
+        }
         double fl = _units.Length, ff = _units.Force, fm = _units.Moment, fp = _units.Pressure;
         bool triangles = layout.Name == CsvLayouts.TriangleRows;
         try
@@ -280,17 +311,23 @@ internal sealed class BlockCsvReducer
                 {
                     int c = layout.Columns[k];
                     ReadOnlySpan<byte> f = row[starts[c]..ends[c]].Trim((ReadOnlySpan<byte>)[(byte)' ', (byte)'\t']);
-                    if (!FastDoubleParser.TryParseDouble(f, out int used, out double x) || used != f.Length || f.Length == 0)
+                    double x;
+                    int used = f.Length;
+                    if (!DecimalFastPath.TryParse(f, out x)
+                        && (!FastDoubleParser.TryParseDouble(f, out used, out x) || used != f.Length || f.Length == 0 || !double.IsFinite(x)))
                     {
-                        return Error(Codes.CsvBadNumber, $"'{Text(f)}' is not a number (use a point as decimal separator)", line, Column(data, lineStart, starts[c]));
-                    }
-                    if (!double.IsFinite(x))
-                    {
-                        return Error(Codes.NotFinite, $"'{Text(f)}' overflows a double", line, Column(data, lineStart, starts[c]));
+                        // a quoted field is reported at its opening quote
+                        int quoteAt = starts[c] > 0 && row[starts[c] - 1] == (byte)'"' ? starts[c] - 1 : starts[c];
+                        string text = Text(f), name = layout.Names[c];
+                        return IsNonFiniteWord(text)
+                            ? Error(Codes.NotFinite, $"'{text}' in column '{name}' is not accepted: NaN and infinity are input errors", line, Column(data, lineStart, quoteAt))
+                            : used == f.Length && f.Length > 0
+                                ? Error(Codes.NotFinite, $"'{text}' in column '{name}' overflows a double", line, Column(data, lineStart, quoteAt))
+                                : Error(Codes.CsvBadNumber, $"'{text}' in column '{name}' is not a number (use a point as decimal separator)", line, Column(data, lineStart, quoteAt));
                     }
                     if (Math.Abs(x) > Codes.MaxMagnitude)
                     {
-                        return Error(Codes.OutOfRange, $"'{Text(f)}' exceeds the largest magnitude accepted (1e100)", line, Column(data, lineStart, starts[c]));
+                        return Error(Codes.OutOfRange, $"'{Text(f)}' in column '{layout.Names[c]}' exceeds the largest magnitude accepted (1e100)", line, Column(data, lineStart, starts[c]));
                     }
                     v[k] = x;
                 }
@@ -336,6 +373,20 @@ internal sealed class BlockCsvReducer
             return Error(Codes.OutOfRange, "values on this line overflow when multiplied (unit conversion or moment)", line, 1);
         }
         return new BlockResult(acc, largest, items, null);
+    }
+
+    private static int FirstInvalid(ReadOnlySpan<byte> bytes)
+    {
+        int pos = 0;
+        while (pos < bytes.Length)
+        {
+            if (Rune.DecodeFromUtf8(bytes[pos..], out _, out int consumed) != OperationStatus.Done)
+            {
+                return pos;
+            }
+            pos += consumed;
+        }
+        return 0;
     }
 
     private static void Keep(List<Contributor> list, Contributor c)
@@ -430,6 +481,10 @@ internal sealed class BlockCsvReducer
     }
 
     private static string Text(ReadOnlySpan<byte> f) => Encoding.UTF8.GetString(f);
+
+    // The words the invariant culture reads as non-finite numbers.
+    private static bool IsNonFiniteWord(string s) =>
+        s.TrimStart('+', '-').ToLowerInvariant() is "nan" or "infinity" or "∞";
 
     private BlockResult Error(string code, string message, long line, int column) =>
         new(new ReductionAccumulator(), [], 0, new Diagnostic(code, Severity.Error, message, new SourceLocation(_display, (int)Math.Min(line, int.MaxValue), column)));

@@ -274,9 +274,15 @@ internal sealed class LoadJsonWalker
                 string meshId = id ?? Derive("mesh#" + ids.Count.ToString(CultureInfo.InvariantCulture));
                 Vector3? dir = Direction(item["direction"], path + ".direction");
                 var csv = new CsvLoadReader(_units, _options, li => sink.Item(li), () => ++_items);
-                if (item["file"] is { } fileNode)
+                if (item["file"] is { } fileNode && sink is IReducedBlockSink bulkMesh)
                 {
-                    csv.ReadTriangleRows(OpenReferenced(fileNode, path + ".file"), meshId, dir);
+                    (string full, string display) = ResolveReferenced(fileNode, path + ".file");
+                    new BlockCsvReducer(display, _options, _units, _options.Threads)
+                        .Reduce(full, bulkMesh, CsvLayouts.TriangleRows, "", meshId, dir, n => _items += n);
+                }
+                else if (item["file"] is { } fileNode2)
+                {
+                    csv.ReadTriangleRows(OpenReferenced(fileNode2, path + ".file"), meshId, dir);
                 }
                 else
                 {
@@ -291,8 +297,17 @@ internal sealed class LoadJsonWalker
             {
                 CheckKeys(item, path, ["id", "kind", "file"]);
                 string prefix = id ?? Derive("forces#" + ids.Count.ToString(CultureInfo.InvariantCulture));
-                var csv = new CsvLoadReader(_units, _options, li => sink.Item(li), () => ++_items);
-                csv.ReadPointLoads(OpenReferenced(Required(item, "file", path), path + ".file"), prefix);
+                if (sink is IReducedBlockSink bulk)
+                {
+                    (string full, string display) = ResolveReferenced(Required(item, "file", path), path + ".file");
+                    new BlockCsvReducer(display, _options, _units, _options.Threads)
+                        .Reduce(full, bulk, CsvLayouts.PointLoads, prefix, prefix, null, n => _items += n);
+                }
+                else
+                {
+                    var csv = new CsvLoadReader(_units, _options, li => sink.Item(li), () => ++_items);
+                    csv.ReadPointLoads(OpenReferenced(Required(item, "file", path), path + ".file"), prefix);
+                }
                 break;
             }
             default:
@@ -302,6 +317,12 @@ internal sealed class LoadJsonWalker
     }
 
     private CsvRowReader OpenReferenced(JsonNode node, string path)
+    {
+        (string full, string display) = ResolveReferenced(node, path);
+        return CsvLoadReader.Open(full, display, _options);
+    }
+
+    private (string Full, string Display) ResolveReferenced(JsonNode node, string path)
     {
         string rel = String(node, path);
         if (rel.Length == 0)
@@ -319,7 +340,7 @@ internal sealed class LoadJsonWalker
         {
             throw Error(node, path, Codes.ReferencedFileMissing, $"referenced file '{rel}' does not exist");
         }
-        return CsvLoadReader.Open(full, DisplayPath(rel), _options);
+        return (full, DisplayPath(rel));
     }
 
     private string DisplayPath(string rel)
