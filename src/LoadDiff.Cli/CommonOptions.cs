@@ -33,24 +33,6 @@ public static class CommonOptions
         CustomParser = ParseUnits,
     };
 
-    /// <summary>--threads N: how many threads parse large CSV files (the result is the same for any N).</summary>
-    public static Option<int> Threads() => new("--threads")
-    {
-        Description = "Threads that parse large CSV files (default: one per core). The result is identical for any number.",
-        HelpName = "N",
-        DefaultValueFactory = _ => Environment.ProcessorCount,
-        CustomParser = r =>
-        {
-            string s = r.Tokens.Count > 0 ? r.Tokens[0].Value : "";
-            if (int.TryParse(s, NumberStyles.None, CultureInfo.InvariantCulture, out int n) && n >= 1 && n <= 256)
-            {
-                return n;
-            }
-            r.AddError($"--threads '{s}': expected a whole number from 1 to 256");
-            return 1;
-        },
-    };
-
     /// <summary>--case NAME (repeatable).</summary>
     public static Option<string[]> Cases() => new("--case")
     {

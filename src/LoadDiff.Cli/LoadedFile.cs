@@ -30,15 +30,10 @@ public sealed class LoadedFile
     public UnitSystem Units => Header.Units;
 
     /// <summary>Reads and reduces a file; prints its warnings and, on failure, its error, then throws <see cref="InputFailureException"/>.</summary>
-    public static LoadedFile Read(string path, UnitSystem? targetUnits, TextWriter error, int topContributors = 0, int threads = 0)
+    public static LoadedFile Read(string path, UnitSystem? targetUnits, TextWriter error, int topContributors = 0, ReadOptions? options = null)
     {
         var sink = new ReductionSink(topContributors: topContributors);
-        var options = new ReadOptions { TargetUnits = targetUnits };
-        if (threads > 0)
-        {
-            options = options with { Threads = threads };
-        }
-        ReadResult result = LoadFileReader.Read(path, sink, options);
+        ReadResult result = LoadFileReader.Read(path, sink, (options ?? new ReadOptions()) with { TargetUnits = targetUnits });
         foreach (Diagnostic d in result.Diagnostics)
         {
             error.WriteLine(d.ToString());

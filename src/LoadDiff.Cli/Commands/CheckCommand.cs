@@ -27,7 +27,7 @@ public static class CheckCommand
         var cases = CommonOptions.Cases();
         var format = CommonOptions.Format("text", "json", "markdown", "junit");
         var units = CommonOptions.Units();
-        var threads = CommonOptions.Threads();
+        var input = new InputOptions();
         var report = new Option<string?>("--report") { Description = "Also write a Markdown report to this file (.md).", HelpName = "FILE.md" };
         var command = new Command("check",
             "Check that SUBSTITUTE is statically equivalent to ORIGINAL for every load case and combination: "
@@ -36,8 +36,9 @@ public static class CheckCommand
             + "Exit code 0 when equivalent, 1 when not, 2 on input or usage errors.\n\n"
             + "Example:\n  loaddiff check fixtures/footbridge/detailed.loads.json fixtures/footbridge/simplified.loads.json --rel-tol 1e-4")
         {
-            original, substitute, at, rel, forceTol, momentTol, cases, format, units, report, threads,
+            original, substitute, at, rel, forceTol, momentTol, cases, format, units, report,
         };
+        input.AddTo(command);
         command.SetAction(parse =>
         {
             TextWriter output = parse.InvocationConfiguration.Output;
@@ -53,8 +54,8 @@ public static class CheckCommand
                 throw new UsageException($"--report '{reportPath}': this version writes Markdown reports (.md)");
             }
             UnitSystem? requested = parse.GetValue(units) is { } u ? new UnitSystem(u.Force, u.Length, UnitCatalog.Kilogram) : null;
-            LoadedFile a = LoadedFile.Read(originalPath, requested, error, ContributorCount, parse.GetValue(threads));
-            LoadedFile b = LoadedFile.Read(substitutePath, a.Units, error, ContributorCount, parse.GetValue(threads));
+            LoadedFile a = LoadedFile.Read(originalPath, requested, error, ContributorCount, input.From(parse));
+            LoadedFile b = LoadedFile.Read(substitutePath, a.Units, error, ContributorCount, input.From(parse));
             var tolerance = ToleranceSpec.Create(parse.GetValue(rel), parse.GetValue(forceTol), parse.GetValue(momentTol));
             string[] selected = parse.GetValue(cases) ?? [];
             foreach (string name in selected)

@@ -18,20 +18,21 @@ public static class ReduceCommand
         var at = CommonOptions.At("the origin");
         var format = CommonOptions.Format("text", "json", "markdown");
         var units = CommonOptions.Units();
-        var threads = CommonOptions.Threads();
+        var input = new InputOptions();
         var command = new Command("reduce",
             "Reduce each load case and combination to its resultant force and moment about one point, with the wrench "
             + "(pitch, central axis, minimum couple) and the single-force line of action where one exists.\n\n"
             + "Example:\n  loaddiff reduce fixtures/footbridge/detailed.loads.json --at centroid --format json")
         {
-            file, cases, at, format, units, threads,
+            file, cases, at, format, units,
         };
+        input.AddTo(command);
         command.SetAction(parse =>
         {
             TextWriter output = parse.InvocationConfiguration.Output;
             TextWriter error = parse.InvocationConfiguration.Error;
             UnitSystem? target = parse.GetValue(units) is { } u ? new UnitSystem(u.Force, u.Length, UnitCatalog.Kilogram) : null;
-            LoadedFile loaded = LoadedFile.Read(parse.GetValue(file)!, target, error, threads: parse.GetValue(threads));
+            LoadedFile loaded = LoadedFile.Read(parse.GetValue(file)!, target, error, options: input.From(parse));
             string[] selected = parse.GetValue(cases) ?? [];
             foreach (string name in selected)
             {
