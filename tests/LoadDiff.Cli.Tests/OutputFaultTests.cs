@@ -1,0 +1,64 @@
+using System.Diagnostics;
+using LoadDiff.Cli.Tests.Support;
+
+namespace LoadDiff.Cli.Tests;
+
+/// <summary>Output files are written through a temporary file and a rename: a failed write leaves what was there.</summary>
+public class OutputFaultTests
+{
+    private static readonly string Detailed = CliProcess.Fixture("footbridge", "detailed.loads.json");
+    private static readonly string Simplified = CliProcess.Fixture("footbridge", "simplified.loads.json");
+
+    private static void Chattr(string flag, string path)
+    {
+        using var p = Process.Start(new ProcessStartInfo("chattr", [flag, path]) { RedirectStandardError = true })!;
+        p.WaitForExit();
+        Assert.True(p.ExitCode == 0, $"chattr {flag} {path} failed: {p.StandardError.ReadToEnd()} (the test needs an ext4-like file system and root)");
+    }
+
+    [Fact]
+    public void A_report_into_a_folder_that_refuses_writes_exits_2_and_keeps_the_old_report()
+    {
+        using var t = new TempFolder();
+        string folder = Path.Combine(t.Path, "reports");
+        Directory.CreateDirectory(folder);
+        string report = Path.Combine(folder, "review.md");
+        File.WriteAllText(report, "previous report\n");
+        // Tests run as root, which ignores permission bits; the immutable attribute stops root too.
+        Chattr("+i", folder);
+        try
+        {
+            CliRun run = CliProcess.Run("check", Detailed, Simplified, "--report", report);
+            Assert.Equal(2, run.ExitCode);
+            Assert.Contains("cannot write", Assert.Single(run.StderrLines));
+            Assert.Equal("previous report\n", File.ReadAllText(report));
+            Assert.Equal(new[] { report }, Directory.GetFiles(folder));
+        }
+        finally
+        {
+            Chattr("-i", folder);
+        }
+    }
+
+    [Fact]
+    public void A_report_path_that_is_a_directory_exits_2()
+    {
+        using var t = new TempFolder();
+        CliRun run = CliProcess.Run("check", Detailed, Simplified, "--report", t.Path + "/sub.md/");
+        Directory.CreateDirectory(Path.Combine(t.Path, "dir.md"));
+        CliRun dir = CliProcess.Run("check", Detailed, Simplified, "--report", Path.Combine(t.Path, "dir.md"));
+        Assert.Equal(2, dir.ExitCode);
+        Assert.Contains("is a directory", dir.Stderr);
+        Assert.Equal(2, run.ExitCode);
+    }
+
+    [Fact]
+    public void A_report_into_a_missing_folder_exits_2()
+    {
+        using var t = new TempFolder();
+        CliRun run = CliProcess.Run("check", Detailed, Simplified, "--report", Path.Combine(t.Path, "no", "such", "r.md"));
+        Assert.Equal(2, run.ExitCode);
+        Assert.Contains("does not exist", run.Stderr);
+        Assert.False(Directory.Exists(Path.Combine(t.Path, "no")));
+    }
+}
