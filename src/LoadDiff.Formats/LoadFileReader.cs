@@ -43,6 +43,10 @@ public static class LoadFileReader
                 return ReadCsv(path, sink, options, warnings);
             }
             var info = new FileInfo(path);
+            if (info.Length > options.StreamJsonAbove)
+            {
+                return ReadJsonStreamed(path, dir, sink, options, warnings);
+            }
             if (info.Length > options.MaxJsonBytes)
             {
                 throw Fail(Codes.FileTooLarge, $"file is {info.Length} bytes, more than the JSON limit of {options.MaxJsonBytes} (put large data in CSV files)", path);
@@ -129,6 +133,83 @@ public static class LoadFileReader
         var walker = new LoadJsonWalker(file, lines, options, dir, warnings);
         DocumentHeader header = walker.Walk(root, sink);
         return new ReadResult(header, warnings);
+    }
+
+    // The checks and error mapping of ReadJsonBytes, for a file read in two streaming passes.
+    private static ReadResult ReadJsonStreamed(string path, string dir, ILoadSink sink, ReadOptions options, List<Diagnostic> warnings)
+    {
+        if (new FileInfo(path).Length > options.MaxCsvBytes)
+        {
+            throw Fail(Codes.FileTooLarge, $"file is larger than the limit of {options.MaxCsvBytes} bytes", path);
+        }
+        byte[] head = new byte[3];
+        int got;
+        using (FileStream f = File.OpenRead(path))
+        {
+            got = f.ReadAtLeast(head, 3, throwOnEndOfStream: false);
+        }
+        if (got >= 2 && ((head[0] == 0xFF && head[1] == 0xFE) || (head[0] == 0xFE && head[1] == 0xFF)))
+        {
+            throw Fail(Codes.InvalidUtf8, "the file is UTF-16 encoded; load files must be UTF-8", path, 1, 1);
+        }
+        long skip = got == 3 && head[0] == 0xEF && head[1] == 0xBB && head[2] == 0xBF ? 3 : 0;
+        var lines = new FileLineLocator(path, skip);
+        if (FileLineLocator.IsBlank(path, skip))
+        {
+            throw Fail(Codes.EmptyInput, "the file is empty; expected a JSON load description", path, 1, 1);
+        }
+        long bad = FileLineLocator.FirstInvalidUtf8(path, skip);
+        if (bad >= 0)
+        {
+            var (l, c) = lines.Locate(bad);
+            throw Fail(Codes.InvalidUtf8, "invalid UTF-8 byte; load files must be UTF-8 text", path, l, c);
+        }
+        JsonTokenPump Open() => new(new FileStream(path, FileMode.Open, FileAccess.Read, FileShare.Read, 1, FileOptions.SequentialScan), options.MaxDepth, skip);
+        try
+        {
+            JsonNode skeleton = StreamingJsonReader.Skeleton(Open);
+            using var feed = new StreamingJsonReader.CaseFeed(Open());
+            var walker = new LoadJsonWalker(path, lines, options, dir, warnings);
+            DocumentHeader header = walker.Walk(skeleton, sink, feed.ForCase);
+            return new ReadResult(header, warnings);
+        }
+        catch (JsonSyntaxError e)
+        {
+            var (l, c) = e.ReaderLine is { } rl ? (rl + 1, 0) : lines.Locate(e.Offset);
+            if (e.ReaderLine is not null)
+            {
+                c = ColumnOf(path, skip, rl: l - 1, e.ReaderBytePosition);
+            }
+            throw e.TooDeep ? Fail(Codes.TooDeep, $"JSON nesting deeper than {options.MaxDepth} levels", path, l, c)
+                : e.InvalidText ? Fail(Codes.InvalidUtf8, e.Message, path, l, c)
+                : Fail(Codes.MalformedJson, "malformed JSON: " + e.Message, path, l, c);
+        }
+        catch (JsonDuplicateKey e)
+        {
+            var (l, c) = lines.Locate(e.Offset);
+            throw Fail(Codes.DuplicateKey, $"key '{e.Key}' appears twice in the same object", path, l, c);
+        }
+    }
+
+    // The character column of a reader position given as (0-based line, byte in line).
+    private static int ColumnOf(string path, long skip, int rl, long bytePosition)
+    {
+        using var s = new StreamReader(new FileStream(path, FileMode.Open, FileAccess.Read, FileShare.Read) { Position = skip });
+        string? line = null;
+        for (int i = 0; i <= rl; i++)
+        {
+            line = s.ReadLine();
+        }
+        byte[] bytes = System.Text.Encoding.UTF8.GetBytes(line ?? "");
+        int n = 0;
+        for (int i = 0; i < Math.Min(bytePosition, bytes.Length); i++)
+        {
+            if ((bytes[i] & 0xC0) != 0x80)
+            {
+                n++;
+            }
+        }
+        return n + 1;
     }
 
     private static ReadResult ReadCsv(string path, ILoadSink sink, ReadOptions options, List<Diagnostic> warnings)

@@ -23,6 +23,9 @@ public sealed record ReadOptions
     /// <summary>Largest CSV file read, in bytes (CSV is streamed).</summary>
     public long MaxCsvBytes { get; init; } = 64L * 1024 * 1024 * 1024;
 
+    /// <summary>JSON files larger than this are streamed (two forward passes, constant memory) instead of read whole.</summary>
+    public long StreamJsonAbove { get; init; } = 32L * 1024 * 1024;
+
     /// <summary>Deepest JSON nesting accepted.</summary>
     public int MaxDepth { get; init; } = 64;
 

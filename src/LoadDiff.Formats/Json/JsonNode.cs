@@ -40,6 +40,11 @@ internal sealed class JsonNode
 
     public static JsonNode Array(long offset, List<JsonNode> elements) => new(JsonKind.Array, offset) { Elements = elements };
 
+    /// <summary>An array whose elements are read later, one at a time, from the file (large load lists).</summary>
+    public static JsonNode StreamedArray(long offset) => new(JsonKind.Array, offset) { Elements = [], Streamed = true };
+
+    public bool Streamed { get; private init; }
+
     public static JsonNode String(long offset, string text) => new(JsonKind.String, offset) { Text = text };
 
     public static JsonNode NumberNode(long offset, double value, string raw) => new(JsonKind.Number, offset) { Number = value, Text = raw };

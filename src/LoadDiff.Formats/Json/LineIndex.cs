@@ -3,7 +3,7 @@ using System.Text;
 namespace LoadDiff.Formats.Json;
 
 /// <summary>Maps byte offsets of a UTF-8 text to 1-based line and character column.</summary>
-internal sealed class LineIndex
+internal sealed class LineIndex : ILineLocator
 {
     private readonly byte[] _bytes;
     private readonly List<long> _lineStarts = [0];

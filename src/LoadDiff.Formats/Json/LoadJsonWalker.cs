@@ -22,7 +22,7 @@ internal sealed class LoadJsonWalker
     private static readonly string[] CaseKeys = ["title", "loads"];
 
     private readonly string _file;
-    private readonly LineIndex _lines;
+    private readonly ILineLocator _lines;
     private readonly ReadOptions _options;
     private readonly string _baseDirectory;
     private readonly List<Diagnostic> _warnings;
@@ -30,8 +30,9 @@ internal sealed class LoadJsonWalker
     private UnitConversion _units = new(UnitSystem.Si, UnitSystem.Si);
     private Vector3 _gravity;
     private long _items;
+    private Func<string, IEnumerable<JsonNode>>? _streamedLoads;
 
-    public LoadJsonWalker(string file, LineIndex lines, ReadOptions options, string baseDirectory, List<Diagnostic> warnings)
+    public LoadJsonWalker(string file, ILineLocator lines, ReadOptions options, string baseDirectory, List<Diagnostic> warnings)
     {
         _file = file;
         _lines = lines;
@@ -40,8 +41,10 @@ internal sealed class LoadJsonWalker
         _warnings = warnings;
     }
 
-    public DocumentHeader Walk(JsonNode root, ILoadSink sink)
+    /// <summary>Walks a whole document; <paramref name="streamedLoads"/> supplies the items of cases whose loads were not kept in the tree.</summary>
+    public DocumentHeader Walk(JsonNode root, ILoadSink sink, Func<string, IEnumerable<JsonNode>>? streamedLoads = null)
     {
+        _streamedLoads = streamedLoads;
         const string path = "$";
         Expect(root, JsonKind.Object, path, "the load description must be a JSON object");
         CheckKeys(root, path, RootKeys);
@@ -156,9 +159,13 @@ internal sealed class LoadJsonWalker
         sink.BeginCase(c.Key, title);
         var ids = new HashSet<string>(StringComparer.Ordinal);
         int couples = 0;
-        for (int i = 0; i < loads.Elements!.Count; i++)
+        // A streamed file keeps no items in the tree: they arrive one at a time, in file order.
+        IEnumerable<JsonNode> items = loads.Streamed ? _streamedLoads!(c.Key) : loads.Elements!;
+        int i = 0;
+        foreach (JsonNode element in items)
         {
-            WalkItem(loads.Elements[i], $"{cpath}.loads[{i}]", ids, ref couples, sink);
+            WalkItem(element, $"{cpath}.loads[{i}]", ids, ref couples, sink);
+            i++;
         }
         sink.EndCase();
     }

@@ -1,0 +1,90 @@
+using LoadDiff.Core;
+using LoadDiff.Core.Model;
+using LoadDiff.Formats.Diagnostics;
+using LoadDiff.Formats.Tests.Support;
+
+namespace LoadDiff.Formats.Tests;
+
+/// <summary>The streamed JSON path (large files) must read exactly what the in-memory path reads, and fail the same way.</summary>
+public class StreamingJsonTests
+{
+    private static readonly ReadOptions Streamed = new() { StreamJsonAbove = 0 };
+
+    private static string Repo()
+    {
+        string? dir = AppContext.BaseDirectory;
+        while (dir is not null && !File.Exists(Path.Combine(dir, "LoadDiff.sln")))
+        {
+            dir = Path.GetDirectoryName(dir);
+        }
+        return dir ?? throw new InvalidOperationException("repository root not found");
+    }
+
+    public static TheoryData<string> JsonFixtures()
+    {
+        var data = new TheoryData<string>();
+        foreach (string f in Directory.EnumerateFiles(Path.Combine(Repo(), "fixtures"), "*.json", SearchOption.AllDirectories).Order(StringComparer.Ordinal))
+        {
+            data.Add(Path.GetRelativePath(Repo(), f));
+        }
+        return data;
+    }
+
+    [Theory]
+    [MemberData(nameof(JsonFixtures))]
+    public void Streamed_and_in_memory_reading_agree_on_every_fixture(string relative)
+    {
+        string path = Path.Combine(Repo(), relative);
+        var a = new CollectingSink();
+        var b = new CollectingSink();
+        ReadResult whole = LoadFileReader.Read(path, a);
+        ReadResult streamed = LoadFileReader.Read(path, b, Streamed);
+        Assert.Equal(whole.Succeeded, streamed.Succeeded);
+        Assert.Equal(whole.Diagnostics.Select(Describe), streamed.Diagnostics.Select(Describe));
+        if (whole.Succeeded)
+        {
+            Assert.Equal(a.Events, b.Events);
+            Assert.Equal(a.Cases.SelectMany(c => c.Items), b.Cases.SelectMany(c => c.Items));
+        }
+    }
+
+    [Fact]
+    public void A_large_loads_array_is_streamed_with_the_header_after_the_cases()
+    {
+        // Units and points written after the cases: the first pass must find them before items are converted.
+        using var t = new TempFolder();
+        var sb = new System.Text.StringBuilder("{ \"cases\": { \"many\": { \"loads\": [\n");
+        for (int i = 0; i < 50_000; i++)
+        {
+            sb.Append("  { \"id\": \"f").Append(i).Append("\", \"kind\": \"force\", \"at\": \"A\", \"value\": [0, 0, -2] },\n");
+        }
+        sb.Append("] } },\n \"units\": { \"force\": \"kN\", \"length\": \"mm\" },\n \"points\": { \"A\": [1000, 0, 0] } }\n");
+        string path = t.Write("many.loads.json", sb.ToString());
+        var sink = new ReductionSink();
+        ReadResult r = LoadFileReader.Read(path, sink, Streamed);
+        Assert.True(r.Succeeded, r.Error?.ToString());
+        Assert.Equal("mm", r.Header!.Units.Length.Symbol);
+        var red = sink.Cases["many"].ResultAt(Vector3.Zero);
+        Assert.Equal(-100_000, red.Force.Z, 9); // 50 000 × 2 kN (exact arithmetic)
+        Assert.Equal(100_000_000, red.Moment.Y, 3); // 100 000 kN at x = 1000 mm: M_y = −x F_z
+    }
+
+    [Fact]
+    public void A_streamed_error_deep_in_the_file_names_its_line()
+    {
+        using var t = new TempFolder();
+        var sb = new System.Text.StringBuilder("{ \"cases\": { \"many\": { \"loads\": [\n");
+        for (int i = 0; i < 30_000; i++)
+        {
+            sb.Append(i == 25_000 ? "  { \"kind\": \"force\", \"at\": [0, 0, 0], \"value\": [0, 0, \"x\"] },\n" : "  { \"kind\": \"couple\", \"value\": [0, 0, 1] },\n");
+        }
+        sb.Append("] } } }\n");
+        string path = t.Write("many.loads.json", sb.ToString());
+        ReadResult r = LoadFileReader.Read(path, new ReductionSink(), Streamed);
+        Assert.Equal(Codes.WrongType, r.Error!.Code);
+        Assert.Equal(25_002, r.Error.Location.Line);
+        Assert.Equal("$.cases.many.loads[25000].value[2]", r.Error.Location.JsonPath);
+    }
+
+    private static string Describe(Diagnostic d) => $"{d.Code} {d.Severity} {d.Location.Line}:{d.Location.Column} {d.Location.JsonPath}";
+}
