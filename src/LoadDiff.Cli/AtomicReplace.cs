@@ -29,7 +29,8 @@ public static class AtomicReplace
             }
             File.Move(temp, full, overwrite: true);
         }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        // .NET reports EFBIG (file-size limit reached) as ArgumentOutOfRangeException from the write
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException or ArgumentOutOfRangeException)
         {
             try
             {
