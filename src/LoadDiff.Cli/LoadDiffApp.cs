@@ -15,6 +15,7 @@ public static class LoadDiffApp
         {
             ReduceCommand.Build(),
             CheckCommand.Build(),
+            DiffCommand.Build(), FmtCommand.Build(),
         };
         return root;
     }

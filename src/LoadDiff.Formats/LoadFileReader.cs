@@ -42,25 +42,11 @@ public static class LoadFileReader
             {
                 return ReadCsv(path, sink, options, warnings);
             }
-            var info = new FileInfo(path);
-            if (info.Length > options.StreamJsonAbove)
+            if (new FileInfo(path).Length > options.StreamJsonAbove)
             {
                 return ReadJsonStreamed(path, dir, sink, options, warnings);
             }
-            if (info.Length > options.MaxJsonBytes)
-            {
-                throw Fail(Codes.FileTooLarge, $"file is {info.Length} bytes, more than the JSON limit of {options.MaxJsonBytes} (put large data in CSV files)", path);
-            }
-            byte[] data;
-            try
-            {
-                data = File.ReadAllBytes(path);
-            }
-            catch (Exception e) when (e is IOException or UnauthorizedAccessException)
-            {
-                throw Fail(Codes.FileUnreadable, "cannot read the file: " + e.Message, path);
-            }
-            return ReadJsonBytes(data, path, dir, sink, options, warnings);
+            return ReadJsonBytes(ReadJsonFile(path, options), path, dir, sink, options, warnings);
         }
         catch (InputError e)
         {
@@ -87,7 +73,12 @@ public static class LoadFileReader
         }
     }
 
-    private static ReadResult ReadJsonBytes(byte[] bytes, string file, string dir, ILoadSink sink, ReadOptions options, List<Diagnostic> warnings)
+    private static ReadResult ReadJsonBytes(byte[] bytes, string file, string dir, ILoadSink sink, ReadOptions options, List<Diagnostic> warnings) =>
+        ReadJsonBytes(bytes, file, dir, sink, options, warnings, null, null);
+
+    /// <summary>The JSON path with hooks for the source-level reader: the parsed tree, and where each item begins.</summary>
+    internal static ReadResult ReadJsonBytes(byte[] bytes, string file, string dir, ILoadSink sink, ReadOptions options, List<Diagnostic> warnings,
+        Action<JsonNode, int>? treeParsed, Action<int, string>? itemBegins)
     {
         if (bytes.AsSpan().StartsWith((ReadOnlySpan<byte>)[0xFF, 0xFE]) || bytes.AsSpan().StartsWith((ReadOnlySpan<byte>)[0xFE, 0xFF]))
         {
@@ -130,7 +121,8 @@ public static class LoadFileReader
         {
             throw Fail(Codes.InvalidUtf8, "the file holds text that is not valid UTF-8", file, 1, 1);
         }
-        var walker = new LoadJsonWalker(file, lines, options, dir, warnings);
+        treeParsed?.Invoke(root, bytes.Length - text.Length);
+        var walker = new LoadJsonWalker(file, lines, options, dir, warnings) { ItemBegins = itemBegins };
         DocumentHeader header = walker.Walk(root, sink);
         return new ReadResult(header, warnings);
     }
@@ -210,6 +202,37 @@ public static class LoadFileReader
             }
         }
         return n + 1;
+    }
+
+    /// <summary>The bytes of a JSON load file (standard input for <c>-</c>), within the size limit; throws <see cref="InputError"/>.</summary>
+    internal static byte[] ReadJsonFile(string path, ReadOptions options)
+    {
+        if (path == "-")
+        {
+            using Stream stdin = Console.OpenStandardInput();
+            return ReadAllBounded(stdin, options.MaxJsonBytes, "-");
+        }
+        if (Directory.Exists(path))
+        {
+            throw Fail(Codes.FileUnreadable, "is a directory, not a load file", path);
+        }
+        if (!File.Exists(path))
+        {
+            throw Fail(Codes.FileUnreadable, "file not found", path);
+        }
+        var info = new FileInfo(path);
+        if (info.Length > options.MaxJsonBytes)
+        {
+            throw Fail(Codes.FileTooLarge, $"file is {info.Length} bytes, more than the JSON limit of {options.MaxJsonBytes} (put large data in CSV files)", path);
+        }
+        try
+        {
+            return File.ReadAllBytes(path);
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        {
+            throw Fail(Codes.FileUnreadable, "cannot read the file: " + e.Message, path);
+        }
     }
 
     private static ReadResult ReadCsv(string path, ILoadSink sink, ReadOptions options, List<Diagnostic> warnings)

@@ -41,6 +41,9 @@ internal sealed class LoadJsonWalker
         _warnings = warnings;
     }
 
+    /// <summary>Called as each item of a case begins, with its index in the case's array and its id (given or derived).</summary>
+    public Action<int, string>? ItemBegins { get; init; }
+
     /// <summary>Walks a whole document; <paramref name="streamedLoads"/> supplies the items of cases whose loads were not kept in the tree.</summary>
     public DocumentHeader Walk(JsonNode root, ILoadSink sink, Func<string, IEnumerable<JsonNode>>? streamedLoads = null)
     {
@@ -164,13 +167,13 @@ internal sealed class LoadJsonWalker
         int i = 0;
         foreach (JsonNode element in items)
         {
-            WalkItem(element, $"{cpath}.loads[{i}]", ids, ref couples, sink);
+            WalkItem(element, i, $"{cpath}.loads[{i}]", ids, ref couples, sink);
             i++;
         }
         sink.EndCase();
     }
 
-    private void WalkItem(JsonNode item, string path, HashSet<string> ids, ref int couples, ILoadSink sink)
+    private void WalkItem(JsonNode item, int index, string path, HashSet<string> ids, ref int couples, ILoadSink sink)
     {
         Expect(item, JsonKind.Object, path, "a load item must be an object with a 'kind'");
         JsonNode kindNode = item["kind"] ?? throw Error(item, path, Codes.MissingField,
@@ -198,6 +201,12 @@ internal sealed class LoadJsonWalker
             }
             return d;
         }
+        string Begin(string basis)
+        {
+            string itemId = id ?? Derive(basis);
+            ItemBegins?.Invoke(index, itemId);
+            return itemId;
+        }
         void Emit(LoadItem li)
         {
             CountItem(item, path);
@@ -210,7 +219,7 @@ internal sealed class LoadJsonWalker
                 CheckKeys(item, path, ["id", "kind", "at", "value"]);
                 Vector3 at = PointOrVec(Required(item, "at", path), path + ".at");
                 Vector3 v = Vec(Required(item, "value", path), path + ".value") * _units.Force;
-                Emit(new PointForce(id ?? Derive("force@" + Text(at)), at, v));
+                Emit(new PointForce(Begin("force@" + Text(at)), at, v));
                 break;
             }
             case "couple":
@@ -218,7 +227,7 @@ internal sealed class LoadJsonWalker
                 CheckKeys(item, path, ["id", "kind", "value"]);
                 Vector3 v = Vec(Required(item, "value", path), path + ".value") * _units.Moment;
                 couples++;
-                Emit(new FreeCouple(id ?? Derive("couple#" + couples.ToString(CultureInfo.InvariantCulture)), v));
+                Emit(new FreeCouple(Begin("couple#" + couples.ToString(CultureInfo.InvariantCulture)), v));
                 break;
             }
             case "line":
@@ -233,7 +242,7 @@ internal sealed class LoadJsonWalker
                 }
                 Vector3 w1 = Vec(Required(item, "start", path), path + ".start") * _units.LineIntensity;
                 Vector3 w2 = Vec(Required(item, "end", path), path + ".end") * _units.LineIntensity;
-                Emit(new LineLoad(id ?? Derive("line@" + Text(a) + "-" + Text(b)), a, b, w1, w2));
+                Emit(new LineLoad(Begin("line@" + Text(a) + "-" + Text(b)), a, b, w1, w2));
                 break;
             }
             case "area":
@@ -264,7 +273,7 @@ internal sealed class LoadJsonWalker
                 Vector3? dir = Direction(item["direction"], path + ".direction");
                 Vector3 grad = item["gradient"] is { } gn ? Vec(gn, path + ".gradient") * _units.PressureGradient : Vector3.Zero;
                 Vector3 origin = item["origin"] is { } on ? PointOrVec(on, path + ".origin") : Vector3.Zero;
-                Emit(new AreaLoad(id ?? Derive("area@" + Text(poly[0])), poly.ToImmutable(), p, dir, grad, origin));
+                Emit(new AreaLoad(Begin("area@" + Text(poly[0])), poly.ToImmutable(), p, dir, grad, origin));
                 break;
             }
             case "mass":
@@ -272,13 +281,13 @@ internal sealed class LoadJsonWalker
                 CheckKeys(item, path, ["id", "kind", "at", "value"]);
                 Vector3 at = PointOrVec(Required(item, "at", path), path + ".at");
                 double m = Number(Required(item, "value", path), path + ".value") * _units.Mass;
-                Emit(new PointMass(id ?? Derive("mass@" + Text(at)), at, m, _gravity));
+                Emit(new PointMass(Begin("mass@" + Text(at)), at, m, _gravity));
                 break;
             }
             case "mesh":
             {
                 CheckKeys(item, path, ["id", "kind", "file", "vertices", "triangles", "direction"]);
-                string meshId = id ?? Derive("mesh#" + ids.Count.ToString(CultureInfo.InvariantCulture));
+                string meshId = Begin("mesh#" + ids.Count.ToString(CultureInfo.InvariantCulture));
                 Vector3? dir = Direction(item["direction"], path + ".direction");
                 var csv = new CsvLoadReader(_units, _options, li => sink.Item(li), () => ++_items);
                 if (item["file"] is { } fileNode && sink is IReducedBlockSink bulkMesh)
@@ -303,7 +312,7 @@ internal sealed class LoadJsonWalker
             case "forces":
             {
                 CheckKeys(item, path, ["id", "kind", "file"]);
-                string prefix = id ?? Derive("forces#" + ids.Count.ToString(CultureInfo.InvariantCulture));
+                string prefix = Begin("forces#" + ids.Count.ToString(CultureInfo.InvariantCulture));
                 if (sink is IReducedBlockSink bulk)
                 {
                     (string full, string display) = ResolveReferenced(Required(item, "file", path), path + ".file");

@@ -1,0 +1,252 @@
+using System.CommandLine;
+using System.Text;
+using LoadDiff.Core;
+using LoadDiff.Core.Diff;
+using LoadDiff.Core.Units;
+using LoadDiff.Formats;
+using LoadDiff.Formats.Source;
+using LoadDiff.Reports;
+
+namespace LoadDiff.Cli.Commands;
+
+/// <summary><c>loaddiff diff OLD NEW</c>: the semantic diff of two versions of a load description, also as git's external diff and textconv.</summary>
+public static class DiffCommand
+{
+    /// <summary>Builds the command.</summary>
+    public static Command Build()
+    {
+        var operands = new Argument<string[]>("OLD NEW")
+        {
+            Description = "The two versions: files, - for standard input, or REV:PATH read through 'git show' (for example HEAD~1:model.loads.json).",
+            Arity = new ArgumentArity(1, 7),
+        };
+        var format = CommonOptions.Format("text", "markdown", "json", "html");
+        var cases = CommonOptions.Cases();
+        var at = CommonOptions.At("the old version's load centroid");
+        var external = new Option<bool>("--git-external")
+        {
+            Description = "Run as git's external diff program (diff.<driver>.command or GIT_EXTERNAL_DIFF): takes git's seven arguments "
+                + "path old-file old-hex old-mode new-file new-hex new-mode, and exits 0 when differences are shown.",
+        };
+        var textconv = new Option<bool>("--textconv")
+        {
+            Description = "Run as git's textconv filter (diff.<driver>.textconv): print one file's canonical listing and its case resultants.",
+        };
+        var command = new Command("diff",
+            "Show what changed between two versions of a load description: items added, removed and changed (matched by case "
+            + "name and id), each change's own contribution ΔR_i, ΔM_i to its case resultant, every case's and combination's "
+            + "resultant before and after, then a line diff of the canonical listings. Key order, item order, whitespace, "
+            + "comments and number spelling are not differences. Exit code 0 when there is no difference, 1 when there are "
+            + "differences, 2 on input or usage errors (with --git-external, 0 whenever the diff was shown).\n\n"
+            + "Examples:\n  loaddiff diff old.loads.json new.loads.json --format markdown\n  loaddiff diff HEAD~1:model.loads.json model.loads.json")
+        {
+            operands, format, cases, at, external, textconv,
+        };
+        command.SetAction(parse =>
+        {
+            TextWriter output = parse.InvocationConfiguration.Output;
+            TextWriter error = parse.InvocationConfiguration.Error;
+            string[] args = parse.GetValue(operands) ?? [];
+            string[] selected = parse.GetValue(cases) ?? [];
+            bool colour = ReferenceEquals(output, Console.Out) && !Console.IsOutputRedirected
+                && string.IsNullOrEmpty(Environment.GetEnvironmentVariable("NO_COLOR"));
+            if (parse.GetValue(textconv))
+            {
+                return args.Length == 1 ? TextConv(args[0], output, error)
+                    : throw new UsageException("--textconv takes one file (git passes it)");
+            }
+            if (parse.GetValue(external))
+            {
+                return External(args, output, error, parse.GetValue(format)!, selected, parse.GetValue(at), colour);
+            }
+            if (args.Length != 2)
+            {
+                throw new UsageException($"diff takes two operands, OLD and NEW; {args.Length} given");
+            }
+            if (args[0] == "-" && args[1] == "-")
+            {
+                throw new UsageException("only one of OLD and NEW can be read from standard input");
+            }
+            DocumentDiff diff = Compare(args[0], Open(args[0], null), args[1], Open(args[1], null), selected, parse.GetValue(at), error, out _);
+            Render(diff, parse.GetValue(format)!, output, colour);
+            return diff.HasDifferences ? ExitCodes.Different : ExitCodes.Success;
+        });
+        return command;
+    }
+
+    private sealed record Source(string Name, byte[]? Bytes, string BaseDirectory);
+
+    private static Source Open(string operand, string? baseDirectory)
+    {
+        if (operand.EndsWith(".csv", StringComparison.OrdinalIgnoreCase))
+        {
+            throw new UsageException($"'{operand}': diff compares .loads.json documents, not CSV data (use 'loaddiff check' for those)");
+        }
+        if (operand == "-")
+        {
+            using Stream stdin = Console.OpenStandardInput();
+            using var ms = new MemoryStream();
+            stdin.CopyTo(ms);
+            return new Source("-", ms.ToArray(), Directory.GetCurrentDirectory());
+        }
+        if (GitSource.IsRevisionPath(operand))
+        {
+            var (bytes, dir) = GitSource.Show(operand);
+            return new Source(operand, bytes, baseDirectory ?? dir);
+        }
+        return new Source(operand, null, baseDirectory ?? Path.GetDirectoryName(Path.GetFullPath(operand))!);
+    }
+
+    private static DocumentDiff Compare(string oldName, Source a, string newName, Source b, string[] selected, ReferenceChoice? at, TextWriter error, out string? failure)
+    {
+        failure = null;
+        SourceReadResult old = Read(a, null, error);
+        UnitSystem units = old.Document!.Units;
+        SourceReadResult @new = Read(b, units, error);
+        foreach (string name in selected)
+        {
+            bool Defines(LoadDocument d) => d.Cases.Any(c => c.Name == name) || d.Combinations.Any(c => c.Name == name);
+            if (!Defines(old.Document) && !Defines(@new.Document!))
+            {
+                throw new UsageException($"--case '{name}': neither version has such a case or combination");
+            }
+        }
+        Vector3 point = ResolvePoint(old, at, oldName, out string description);
+        return DocumentDiffer.Compare(oldName, old, newName, @new, point, description, selected);
+    }
+
+    private static SourceReadResult Read(Source s, UnitSystem? target, TextWriter error)
+    {
+        var options = new ReadOptions { TargetUnits = target };
+        SourceReadResult r = s.Bytes is null ? LoadDocumentReader.Read(s.Name, options) : LoadDocumentReader.ReadBytes(s.Bytes, s.Name, s.BaseDirectory, options);
+        FmtCommand.Report(r, error);
+        return r;
+    }
+
+    private static Vector3 ResolvePoint(SourceReadResult old, ReferenceChoice? choice, string oldName, out string description)
+    {
+        choice ??= new ReferenceChoice("centroid");
+        switch (choice.Kind)
+        {
+            case "centroid":
+                Vector3? c = old.Resultants!.Cases.AllCases().ResultAt(Vector3.Zero).Centroid;
+                description = c is null ? "origin: the old version has no forces, so no load centroid" : "load centroid of " + oldName;
+                return c ?? Vector3.Zero;
+            case "point":
+                if (old.Document!.Point(choice.Name!) is { } p)
+                {
+                    description = "named point " + choice.Name + " of " + oldName;
+                    return p;
+                }
+                throw new UsageException($"--at '{choice.Name}': {oldName} has no such named point"
+                    + (old.Document.Points.Length > 0 ? "; named points are " + string.Join(", ", old.Document.Points.Select(x => x.Key)) : ""));
+            default:
+                description = choice.Coordinates == Vector3.Zero ? "origin" : "given point";
+                return choice.Coordinates!.Value;
+        }
+    }
+
+    private static void Render(DocumentDiff diff, string format, TextWriter output, bool colour)
+    {
+        switch (format)
+        {
+            case "json":
+                using (var ms = new MemoryStream())
+                {
+                    DiffJsonWriter.Write(diff, ms, AppInfo.Version);
+                    output.Write(Encoding.UTF8.GetString(ms.ToArray()));
+                    output.WriteLine();
+                }
+                break;
+            case "markdown":
+                DiffMarkdownRenderer.Write(diff, output);
+                break;
+            case "html":
+                DiffHtmlRenderer.Write(diff, output, AppInfo.Version);
+                break;
+            default:
+                DiffTextRenderer.Write(diff, output, colour);
+                break;
+        }
+    }
+
+    // git: path old-file old-hex old-mode new-file new-hex new-mode (one argument, the path, for an unmerged file)
+    private static int External(string[] args, TextWriter output, TextWriter error, string format, string[] selected, ReferenceChoice? at, bool colour)
+    {
+        if (args.Length == 1)
+        {
+            output.WriteLine($"loaddiff: {args[0]} is unmerged; resolve the conflict first");
+            return ExitCodes.Success;
+        }
+        if (args.Length != 7)
+        {
+            throw new UsageException($"--git-external expects git's 7 arguments (path old-file old-hex old-mode new-file new-hex new-mode); {args.Length} given");
+        }
+        string path = args[0], oldFile = args[1], newFile = args[4];
+        // referenced CSV files are read from the work tree beside the path (git hands over only the JSON blobs)
+        string baseDir = Path.GetDirectoryName(Path.GetFullPath(path))!;
+        string oldName = "a/" + path, newName = "b/" + path;
+        output.WriteLine($"loaddiff diff {oldName} {newName}");
+        if (oldFile == "/dev/null" || newFile == "/dev/null")
+        {
+            bool added = oldFile == "/dev/null";
+            output.WriteLine(added ? $"new load file {path}" : $"deleted load file {path}");
+            string text = File.ReadAllText(added ? newFile : oldFile);
+            foreach (ListingLine l in ListingDiff.Lines(added ? "" : text, added ? text : ""))
+            {
+                output.WriteLine(l.Tag == '@' ? l.Text : l.Tag + l.Text);
+            }
+            return ExitCodes.Success;
+        }
+        var a = new Source(oldName, File.ReadAllBytes(oldFile), baseDir);
+        var b = new Source(newName, File.ReadAllBytes(newFile), baseDir);
+        var captured = new StringWriter();
+        try
+        {
+            DocumentDiff diff = Compare(oldName, a, newName, b, selected, at, captured, out _);
+            error.Write(captured.ToString());
+            Render(diff, format, output, colour);
+        }
+        catch (Exception e) when (e is InputFailureException or UsageException)
+        {
+            // show the trouble where the reader looks, then the plain line diff, and let git go on to the next file
+            string why = e is UsageException ? "loaddiff: " + e.Message : captured.ToString().TrimEnd();
+            error.WriteLine(why);
+            output.WriteLine(why);
+            output.WriteLine("(plain line diff follows)");
+            foreach (ListingLine l in ListingDiff.Lines(Encoding.UTF8.GetString(a.Bytes!), Encoding.UTF8.GetString(b.Bytes!)))
+            {
+                output.WriteLine(l.Tag == '@' ? l.Text : l.Tag + l.Text);
+            }
+        }
+        return ExitCodes.Success;
+    }
+
+    // git: textconv gets one file (often a temporary copy of a blob) and diffs whatever this prints
+    private static int TextConv(string file, TextWriter output, TextWriter error)
+    {
+        byte[] bytes = File.Exists(file) ? File.ReadAllBytes(file) : throw new UsageException($"'{file}': file not found");
+        SourceReadResult r = LoadDocumentReader.ReadBytes(bytes, file, Path.GetDirectoryName(Path.GetFullPath(file))!);
+        if (!r.Succeeded)
+        {
+            // not readable as a load description (a referenced CSV beside a temporary copy, say): show it as it is
+            output.Write(Encoding.UTF8.GetString(bytes));
+            output.WriteLine($"// loaddiff: {r.Error}");
+            return ExitCodes.Success;
+        }
+        output.Write(CanonicalWriter.Write(r.Document!));
+        string f = r.Document!.Units.Force.Symbol, m = r.Document.Units.MomentSymbol;
+        output.WriteLine($"// resultants about the origin ({f}, {m}; loaddiff)");
+        foreach (string name in r.Resultants!.Cases.CaseNames)
+        {
+            var red = r.Resultants.Cases.Cases[name].ResultAt(Vector3.Zero);
+            output.WriteLine($"// case {name}: R = {SourceText.Vector(red.Force)} M = {SourceText.Vector(red.Moment)}");
+        }
+        foreach (var c in r.Resultants.Cases.Combinations)
+        {
+            var red = c.Combine(r.Resultants.Cases.Cases, out _).ResultAt(Vector3.Zero);
+            output.WriteLine($"// combination {c.Name}: R = {SourceText.Vector(red.Force)} M = {SourceText.Vector(red.Moment)}");
+        }
+        return ExitCodes.Success;
+    }
+}

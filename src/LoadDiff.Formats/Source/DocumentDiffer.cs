@@ -1,0 +1,237 @@
+using System.Globalization;
+using LoadDiff.Core;
+using LoadDiff.Core.Diff;
+using LoadDiff.Core.Model;
+using LoadDiff.Core.Reduction;
+using LoadDiff.Core.Units;
+
+namespace LoadDiff.Formats.Source;
+
+/// <summary>
+/// The semantic diff of two versions of a load description: cases matched by name, items by id (or derived key),
+/// fields compared value by value in the old version's units, and each change's own contribution ΔR_i, ΔM_i to its
+/// case resultant about the reference point. Order, whitespace, comments and number spelling are not differences.
+/// </summary>
+public static class DocumentDiffer
+{
+    /// <summary>Relative agreement, in units of the double epsilon, under which converted values count as equal.</summary>
+    public const double ConvertedUlps = 4;
+
+    private const double MachineEpsilon = 2.220446049250313e-16; // 2^-52, the spacing of doubles at 1
+
+    /// <summary>Compares two successfully read versions.</summary>
+    /// <param name="oldName">The old version as the user named it.</param>
+    /// <param name="old">The old version.</param>
+    /// <param name="newName">The new version as the user named it.</param>
+    /// <param name="new">The new version, read with <see cref="ReadOptions.TargetUnits"/> set to the old version's units.</param>
+    /// <param name="point">The reference point for moments, in the old version's units.</param>
+    /// <param name="pointDescription">How the point was chosen.</param>
+    /// <param name="selected">Only these cases and combinations (all when empty).</param>
+    public static DocumentDiff Compare(string oldName, SourceReadResult old, string newName, SourceReadResult @new, Vector3 point,
+        string pointDescription, IReadOnlyCollection<string> selected)
+    {
+        ArgumentNullException.ThrowIfNull(old);
+        ArgumentNullException.ThrowIfNull(@new);
+        ArgumentNullException.ThrowIfNull(selected);
+        LoadDocument a = old.Document ?? throw new ArgumentException("the old version was not read", nameof(old));
+        LoadDocument bAsWritten = @new.Document ?? throw new ArgumentException("the new version was not read", nameof(@new));
+        LoadDocument b = bAsWritten.ConvertTo(a.Units);
+        bool converted = bAsWritten.Units != a.Units;
+        var ctx = new Context(a, b, converted);
+        bool Wanted(string name) => selected.Count == 0 || selected.Contains(name);
+
+        var settings = new List<SettingChange>();
+        if (a.Title != b.Title)
+        {
+            settings.Add(new SettingChange("title", Kind(a.Title, b.Title), Q(a.Title), Q(b.Title), ""));
+        }
+        if (converted)
+        {
+            settings.Add(new SettingChange("units", ChangeKind.Changed, a.Units.ToString(), bAsWritten.Units.ToString(), ""));
+        }
+        if (!ctx.Same(a.Gravity, b.Gravity))
+        {
+            settings.Add(new SettingChange("gravity", ChangeKind.Changed, a.Gravity is { } ga ? SourceText.Vector(ga) : "default (standard gravity along −z)",
+                b.Gravity is { } gb ? SourceText.Vector(gb) : "default (standard gravity along −z)", Quantities.Symbol(Quantity.Acceleration, a.Units)));
+        }
+        foreach (var p in a.Points)
+        {
+            Vector3? q = b.Point(p.Key);
+            if (q is null)
+            {
+                settings.Add(new SettingChange("point " + p.Key, ChangeKind.Removed, SourceText.Vector(p.Value), null, a.Units.Length.Symbol));
+            }
+            else if (!ctx.Same(p.Value, q.Value))
+            {
+                settings.Add(new SettingChange("point " + p.Key, ChangeKind.Changed, SourceText.Vector(p.Value), SourceText.Vector(q.Value), a.Units.Length.Symbol));
+            }
+        }
+        foreach (var p in b.Points.Where(p => a.Point(p.Key) is null))
+        {
+            settings.Add(new SettingChange("point " + p.Key, ChangeKind.Added, null, SourceText.Vector(p.Value), a.Units.Length.Symbol));
+        }
+
+        var items = new List<ItemChange>();
+        var resultants = new List<ResultantChange>();
+        IReadOnlyList<string> caseNames = [.. a.Cases.Select(c => c.Name), .. b.Cases.Select(c => c.Name).Where(n => a.Cases.All(c => c.Name != n))];
+        foreach (string name in caseNames.Where(Wanted))
+        {
+            SourceCase? ca = a.Cases.FirstOrDefault(c => c.Name == name);
+            SourceCase? cb = b.Cases.FirstOrDefault(c => c.Name == name);
+            if (ca is null || cb is null)
+            {
+                SourceCase only = (ca ?? cb)!;
+                settings.Add(new SettingChange("case " + name, ca is null ? ChangeKind.Added : ChangeKind.Removed,
+                    ca is null ? null : Count(only), cb is null ? null : Count(only), ""));
+            }
+            else if (ca.Title != cb.Title)
+            {
+                settings.Add(new SettingChange($"case {name} title", Kind(ca.Title, cb.Title), Q(ca.Title), Q(cb.Title), ""));
+            }
+            items.AddRange(CompareCase(name, ca, cb, old.Resultants!, @new.Resultants!, point, ctx));
+            resultants.Add(new ResultantChange(name, EntryKind.Case,
+                ca is null ? null : old.Resultants!.Cases.Cases[name].ResultAt(point).System,
+                cb is null ? null : @new.Resultants!.Cases.Cases[name].ResultAt(point).System));
+        }
+
+        IReadOnlyList<string> comboNames = [.. a.Combinations.Select(c => c.Name), .. b.Combinations.Select(c => c.Name).Where(n => a.Combinations.All(c => c.Name != n))];
+        foreach (string name in comboNames.Where(Wanted))
+        {
+            LoadCombination? ka = a.Combinations.FirstOrDefault(c => c.Name == name);
+            LoadCombination? kb = b.Combinations.FirstOrDefault(c => c.Name == name);
+            if (ka is null || kb is null || !SameFactors(ka, kb))
+            {
+                settings.Add(new SettingChange("combination " + name, Kind(ka, kb), ka is null ? null : Factors(ka), kb is null ? null : Factors(kb), ""));
+            }
+            resultants.Add(new ResultantChange(name, EntryKind.Combination,
+                ka is null ? null : ka.Combine(old.Resultants!.Cases.Cases, out _).ResultAt(point).System,
+                kb is null ? null : kb.Combine(@new.Resultants!.Cases.Cases, out _).ResultAt(point).System));
+        }
+
+        var notes = new List<string>();
+        if (converted)
+        {
+            notes.Add($"{newName} is written in {bAsWritten.Units}; it was converted into {oldName}'s units {a.Units} with the exact NIST SP 811 factors before comparing, "
+                + $"and values that agree within {ConvertedUlps.ToString(CultureInfo.InvariantCulture)} ulp after conversion count as equal. Its listing below is the converted one.");
+        }
+        if (a.Cases.Concat(b.Cases).Any(c => c.Items.Any(i => i.Id is null)))
+        {
+            notes.Add("items without an id are matched by a key derived from their kind and position (shown starting with ~); such an item that moves shows as removed and added. Give items ids to track them.");
+        }
+        if (a.Cases.Concat(b.Cases).Any(c => c.Items.Any(i => i.Kind is "mesh" or "forces")))
+        {
+            notes.Add("mesh and forces items are compared by their file references, and the CSV data they reference by the reduced resultant of those data.");
+        }
+        return new DocumentDiff(oldName, newName, a.Units, bAsWritten.Units, point, pointDescription, settings, items, resultants,
+            CanonicalWriter.Write(a), CanonicalWriter.Write(b), notes);
+    }
+
+    private static List<ItemChange> CompareCase(string name, SourceCase? ca, SourceCase? cb, DocumentResultants ra, DocumentResultants rb, Vector3 point, Context ctx)
+    {
+        var list = new List<ItemChange>();
+        IReadOnlyList<ItemResultant> ia = ra.Items(name), ib = rb.Items(name);
+        var newByKey = new Dictionary<string, int>(StringComparer.Ordinal);
+        for (int j = 0; cb is not null && j < cb.Items.Length; j++)
+        {
+            newByKey[ib[j].Key] = j;
+        }
+        var matched = new HashSet<int>();
+        for (int i = 0; ca is not null && i < ca.Items.Length; i++)
+        {
+            SourceItem x = ca.Items[i];
+            var (fa, ma) = ia[i].ContributionAbout(point);
+            if (!newByKey.TryGetValue(ia[i].Key, out int j))
+            {
+                list.Add(new ItemChange(name, ia[i].Key, x.Id is null, x.Kind, ChangeKind.Removed, AllFields(x, ctx.Old, ctx, removed: true), -fa, -ma));
+                continue;
+            }
+            matched.Add(j);
+            SourceItem y = cb!.Items[j];
+            var (fb, mb) = ib[j].ContributionAbout(point);
+            var fields = new List<FieldChange>();
+            if (x.Kind != y.Kind)
+            {
+                fields.Add(new FieldChange("kind", x.Kind, y.Kind, ""));
+            }
+            foreach (string field in Quantities.FieldOrder(x.Kind).Concat(Quantities.FieldOrder(y.Kind)).Distinct())
+            {
+                SourceValue? u = x[field], v = y[field];
+                if (!ctx.Same(u, v))
+                {
+                    Quantity q = Quantities.Of(y[field] is null ? x.Kind : y.Kind, field);
+                    fields.Add(new FieldChange(field, u is null ? null : Context.Text(u, ctx.Old), v is null ? null : Context.Text(v, ctx.New), Quantities.Symbol(q, ctx.Old.Units)));
+                }
+            }
+            if (fields.Count == 0 && !(ctx.Close(fa, fb) && ctx.Close(ma, mb)))
+            {
+                // same fields, different load: gravity changed under a mass, or the referenced CSV data changed
+                string why = x.Kind is "mesh" or "forces" ? "referenced data" : x.Kind == "mass" ? "weight (gravity changed)" : "load";
+                fields.Add(new FieldChange(why, "R = " + SourceText.Vector(fa), "R = " + SourceText.Vector(fb), ctx.Old.Units.Force.Symbol));
+            }
+            if (fields.Count > 0)
+            {
+                list.Add(new ItemChange(name, ia[i].Key, x.Id is null, y.Kind, ChangeKind.Changed, fields, fb - fa, mb - ma));
+            }
+        }
+        for (int j = 0; cb is not null && j < cb.Items.Length; j++)
+        {
+            if (!matched.Contains(j))
+            {
+                SourceItem y = cb.Items[j];
+                var (fb, mb) = ib[j].ContributionAbout(point);
+                list.Add(new ItemChange(name, ib[j].Key, y.Id is null, y.Kind, ChangeKind.Added, AllFields(y, ctx.New, ctx, removed: false), fb, mb));
+            }
+        }
+        return list;
+    }
+
+    private static List<FieldChange> AllFields(SourceItem item, LoadDocument doc, Context ctx, bool removed) =>
+        [.. item.Fields.Select(f => new FieldChange(f.Name, removed ? Context.Text(f.Value, doc) : null, removed ? null : Context.Text(f.Value, doc),
+            Quantities.Symbol(Quantities.Of(item.Kind, f.Name), ctx.Old.Units)))];
+
+    private static bool SameFactors(LoadCombination a, LoadCombination b) =>
+        a.Factors.Length == b.Factors.Length && a.Factors.All(f => b.Factors.Any(g => g.Key == f.Key && g.Value == f.Value));
+
+    private static string Factors(LoadCombination c) =>
+        string.Join(" + ", c.Factors.Select(f => SourceText.Number(f.Value) + "·" + f.Key));
+
+    private static string Count(SourceCase c) => c.Items.Length.ToString(CultureInfo.InvariantCulture) + (c.Items.Length == 1 ? " item" : " items");
+
+    private static string? Q(string? s) => s is null ? null : SourceText.Quoted(s);
+
+    private static ChangeKind Kind(object? a, object? b) => a is null ? ChangeKind.Added : b is null ? ChangeKind.Removed : ChangeKind.Changed;
+
+    private sealed class Context(LoadDocument old, LoadDocument @new, bool converted)
+    {
+        public LoadDocument Old { get; } = old;
+
+        public LoadDocument New { get; } = @new;
+
+        public bool Same(double x, double y) =>
+            x == y || (converted && Math.Abs(x - y) <= ConvertedUlps * MachineEpsilon * Math.Max(Math.Abs(x), Math.Abs(y)));
+
+        public bool Same(Vector3 x, Vector3 y) => Same(x.X, y.X) && Same(x.Y, y.Y) && Same(x.Z, y.Z);
+
+        public bool Same(Vector3? x, Vector3? y) => x is { } p ? y is { } q && Same(p, q) : y is null;
+
+        public bool Close(Vector3 x, Vector3 y) => converted ? (x - y).Length <= 1e-12 * Math.Max(x.Length, y.Length) : x == y;
+
+        public bool Same(SourceValue? x, SourceValue? y) => (x, y) switch
+        {
+            (null, null) => true,
+            (NumberValue p, NumberValue q) => Same(p.Value, q.Value),
+            (VectorValue p, VectorValue q) => Same(p.Value, q.Value),
+            (PointReference p, PointReference q) => p.Name == q.Name && Same(Old.Point(p.Name), New.Point(q.Name)),
+            (TextValue p, TextValue q) => p.Text == q.Text,
+            (PolygonValue p, PolygonValue q) => p.Vertices.Length == q.Vertices.Length && p.Vertices.Zip(q.Vertices).All(t => Same(t.First, t.Second)),
+            _ => false,
+        };
+
+        public static string Text(SourceValue v, LoadDocument doc) => v switch
+        {
+            PointReference p => SourceText.Quoted(p.Name) + " = " + (doc.Point(p.Name) is { } at ? SourceText.Vector(at) : "?"),
+            PolygonValue poly => "[" + string.Join(", ", poly.Vertices.Select(x => Text(x, doc))) + "]",
+            _ => SourceText.Of(v),
+        };
+    }
+}

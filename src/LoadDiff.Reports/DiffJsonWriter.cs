@@ -1,0 +1,116 @@
+using System.Text.Json;
+using LoadDiff.Core.Diff;
+using LoadDiff.Core.Reduction;
+
+namespace LoadDiff.Reports;
+
+/// <summary>The documented JSON of <c>diff</c> (schema_version 1, snake_case keys, shortest round-trip numbers).</summary>
+public static class DiffJsonWriter
+{
+    /// <summary>Schema version of this output.</summary>
+    public const int SchemaVersion = 1;
+
+    /// <summary>Writes the diff as UTF-8 JSON.</summary>
+    public static void Write(DocumentDiff d, Stream output, string toolVersion)
+    {
+        ArgumentNullException.ThrowIfNull(d);
+        using var w = new Utf8JsonWriter(output, new JsonWriterOptions { Indented = true, Encoder = System.Text.Encodings.Web.JavaScriptEncoder.UnsafeRelaxedJsonEscaping });
+        w.WriteStartObject();
+        w.WriteNumber("schema_version", SchemaVersion);
+        w.WriteStartObject("tool");
+        w.WriteString("name", "loaddiff");
+        w.WriteString("version", toolVersion);
+        w.WriteEndObject();
+        w.WriteString("old_file", d.OldName);
+        w.WriteString("new_file", d.NewName);
+        w.WriteBoolean("different", d.HasDifferences);
+        JsonOut.Units(w, d.Units);
+        w.WriteString("mass_unit", d.Units.Mass.Symbol);
+        w.WriteBoolean("units_converted", d.UnitsConverted);
+        w.WriteStartObject("new_units");
+        w.WriteString("force", d.NewUnits.Force.Symbol);
+        w.WriteString("length", d.NewUnits.Length.Symbol);
+        w.WriteString("mass", d.NewUnits.Mass.Symbol);
+        w.WriteEndObject();
+        JsonOut.Vector(w, "reference_point", d.ReferencePoint);
+        w.WriteString("reference", d.ReferenceDescription);
+        w.WriteStartArray("settings");
+        foreach (SettingChange s in d.Settings)
+        {
+            w.WriteStartObject();
+            w.WriteString("what", s.What);
+            w.WriteString("change", DiffWords.Change(s.Change));
+            w.WriteString("old", s.Old);
+            w.WriteString("new", s.New);
+            w.WriteString("unit", s.Unit);
+            w.WriteEndObject();
+        }
+        w.WriteEndArray();
+        w.WriteStartArray("items");
+        foreach (ItemChange i in d.Items)
+        {
+            w.WriteStartObject();
+            w.WriteString("case", i.Case);
+            w.WriteString("id", i.Id);
+            w.WriteBoolean("derived_id", i.DerivedId);
+            w.WriteString("kind", i.Kind);
+            w.WriteString("change", DiffWords.Change(i.Change));
+            w.WriteStartArray("fields");
+            foreach (FieldChange c in i.Fields)
+            {
+                w.WriteStartObject();
+                w.WriteString("field", c.Field);
+                w.WriteString("old", c.Old);
+                w.WriteString("new", c.New);
+                w.WriteString("unit", c.Unit);
+                w.WriteEndObject();
+            }
+            w.WriteEndArray();
+            JsonOut.Vector(w, "delta_force", i.DeltaForce);
+            JsonOut.Vector(w, "delta_moment", i.DeltaMoment);
+            w.WriteEndObject();
+        }
+        w.WriteEndArray();
+        w.WriteStartArray("resultants");
+        foreach (ResultantChange r in d.Resultants)
+        {
+            w.WriteStartObject();
+            w.WriteString("name", r.Name);
+            w.WriteString("kind", r.Kind == Core.Model.EntryKind.Case ? "case" : "combination");
+            WriteSystem(w, "old", r.Old);
+            WriteSystem(w, "new", r.New);
+            JsonOut.Vector(w, "delta_force", r.DeltaForce);
+            JsonOut.Vector(w, "delta_moment", r.DeltaMoment);
+            w.WriteBoolean("unchanged", r.Unchanged);
+            w.WriteEndObject();
+        }
+        w.WriteEndArray();
+        w.WriteStartArray("notes");
+        foreach (string n in d.Notes)
+        {
+            w.WriteStringValue(n);
+        }
+        w.WriteEndArray();
+        var text = new System.Text.StringBuilder();
+        foreach (ListingLine l in ListingDiff.Lines(d.OldListing, d.NewListing))
+        {
+            text.Append(l.Tag == '@' ? l.Text : l.Tag + l.Text).Append('\n');
+        }
+        w.WriteString("listing_diff", text.ToString());
+        w.WriteString("caution", DiffWords.Caution);
+        w.WriteEndObject();
+    }
+
+    private static void WriteSystem(Utf8JsonWriter w, string name, ForceCoupleSystem? s)
+    {
+        if (s is not { } x)
+        {
+            w.WriteNull(name);
+            return;
+        }
+        w.WriteStartObject(name);
+        JsonOut.Vector(w, "force", x.Force);
+        JsonOut.Vector(w, "moment", x.Moment);
+        w.WriteEndObject();
+    }
+}

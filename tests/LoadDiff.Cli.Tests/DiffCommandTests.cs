@@ -1,0 +1,100 @@
+using System.Text.Json;
+using LoadDiff.Cli.Tests.Support;
+
+namespace LoadDiff.Cli.Tests;
+
+public class DiffCommandTests
+{
+    private static readonly string Detailed = CliProcess.Fixture("footbridge", "detailed.loads.json");
+    private static readonly string RevisionB = CliProcess.Fixture("footbridge", "detailed-rev-b.loads.json");
+
+    private const string V1 = """
+        { "units": { "force": "kN", "length": "m" }, "cases": { "dead": { "loads": [
+          { "id": "p1", "kind": "force", "at": [1, 0, 0], "value": [0, 0, -10] },
+          { "id": "p2", "kind": "force", "at": [4, 0, 0], "value": [0, 0, -20] } ] } } }
+        """;
+
+    [Fact]
+    public void Reordered_reformatted_and_commented_file_exits_0()
+    {
+        using var t = new TempFolder();
+        string a = t.Write("a.loads.json", V1);
+        string b = t.Write("b.loads.json", """
+            // same loads, written differently
+            { "cases": { "dead": { "loads": [
+              { "value": [0, 0, -2e1], "at": [4.0, 0, 0], "kind": "force", "id": "p2" },
+              { "id": "p1", "kind": "force", "at": [1, 0, 0], "value": [0, 0, -10.000] }, ] } },
+              "units": { "length": "m", "force": "kN" } }
+            """);
+        CliRun run = CliProcess.Run("diff", a, b);
+        Assert.True(run.ExitCode == 0, run.ToString());
+        Assert.Contains("No differences", run.Stdout);
+    }
+
+    [Fact]
+    public void Changed_removed_and_added_items_exit_1_and_are_named()
+    {
+        using var t = new TempFolder();
+        string a = t.Write("a.loads.json", V1);
+        string b = t.Write("b.loads.json", """
+            { "units": { "force": "kN", "length": "m" }, "cases": { "dead": { "loads": [
+              { "id": "p1", "kind": "force", "at": [1, 0, 0], "value": [0, 0, -12] },
+              { "id": "p3", "kind": "force", "at": [2, 0, 0], "value": [0, 0, -5] } ] } } }
+            """);
+        CliRun run = CliProcess.Run("diff", a, b, "--format", "json", "--at", "0,0,0");
+        Assert.True(run.ExitCode == 1, run.ToString());
+        using JsonDocument doc = JsonDocument.Parse(run.Stdout);
+        Assert.Equal(1, doc.RootElement.GetProperty("schema_version").GetInt32());
+        var items = doc.RootElement.GetProperty("items").EnumerateArray().ToDictionary(i => i.GetProperty("id").GetString()!, i => i.GetProperty("change").GetString());
+        Assert.Equal(new Dictionary<string, string?> { ["p1"] = "changed", ["p2"] = "removed", ["p3"] = "added" }, items);
+        JsonElement dead = doc.RootElement.GetProperty("resultants")[0];
+        // hand: ΔR = −2 + 20 − 5 = +13 kN in z
+        Assert.Equal(13, dead.GetProperty("delta_force")[2].GetDouble());
+    }
+
+    [Fact]
+    public void Demo_revision_names_the_heavier_vehicle_and_the_lighting_column()
+    {
+        CliRun run = CliProcess.Run("diff", Detailed, RevisionB);
+        Assert.True(run.ExitCode == 1, run.ToString());
+        Assert.Contains("~ changed  water-tank (mass)", run.Stdout);
+        Assert.Contains("value: 800 → 1000 kg", run.Stdout);
+        // 200 kg × 9.80665 m/s² (CGPM standard gravity) = 1.96133 kN
+        Assert.Contains("ΔR_i = (0, 0, -1.96133) kN", run.Stdout);
+        Assert.Contains("+ added    lighting-column (force)", run.Stdout);
+        Assert.Contains("@@", run.Stdout);
+        Assert.DoesNotContain("\u001b[", run.Stdout); // not a terminal: no colour
+    }
+
+    [Fact]
+    public void Markdown_and_html_outputs_are_fit_for_a_review()
+    {
+        CliRun md = CliProcess.Run("diff", Detailed, RevisionB, "--format", "markdown");
+        Assert.Equal(1, md.ExitCode);
+        Assert.Contains("| case | item | change |", md.Stdout);
+        Assert.Contains("````diff", md.Stdout);
+        CliRun html = CliProcess.Run("diff", Detailed, RevisionB, "--format", "html");
+        Assert.Equal(1, html.ExitCode);
+        Assert.StartsWith("<!DOCTYPE html>", html.Stdout, StringComparison.Ordinal);
+        Assert.Contains("<style>", html.Stdout);
+        Assert.DoesNotContain("<script", html.Stdout, StringComparison.OrdinalIgnoreCase);
+        Assert.DoesNotContain("http://", html.Stdout, StringComparison.Ordinal);
+        Assert.DoesNotContain("https://", html.Stdout, StringComparison.Ordinal);
+        Assert.DoesNotContain("<link", html.Stdout, StringComparison.OrdinalIgnoreCase);
+    }
+
+    [Fact]
+    public void Bad_input_exits_2_with_the_same_diagnostic_as_reduce()
+    {
+        using var t = new TempFolder();
+        string bad = t.Write("bad.loads.json", """{ "cases": { "d": { "loads": [ { "kind": "force", "at": [0, 0, 0], "value": [0, "x", 0] } ] } } }""");
+        CliRun reduce = CliProcess.Run("reduce", bad);
+        CliRun diff = CliProcess.Run("diff", Detailed, bad);
+        CliRun fmt = CliProcess.Run("fmt", bad);
+        Assert.Equal(2, diff.ExitCode);
+        Assert.Equal(2, fmt.ExitCode);
+        Assert.Equal(reduce.StderrLines, diff.StderrLines);
+        Assert.Equal(reduce.StderrLines, fmt.StderrLines);
+        Assert.Contains("LD010", diff.Stderr);
+    }
+}

@@ -1,0 +1,104 @@
+using System.Diagnostics;
+using LoadDiff.Cli.Tests.Support;
+
+namespace LoadDiff.Cli.Tests;
+
+/// <summary>Real git in a temporary repository: the driver configured through git's documented interfaces.</summary>
+public sealed class GitIntegrationTests : IDisposable
+{
+    private readonly TempFolder _repo = new();
+
+    public GitIntegrationTests()
+    {
+        Git("init", "-q", "-b", "main");
+        Git("config", "user.name", "Test Engineer");
+        Git("config", "user.email", "engineer@example.invalid");
+        string tool = $"dotnet \"{CliProcess.ToolDll}\"";
+        Git("config", "diff.loaddiff.command", tool + " diff --git-external");
+        Git("config", "diff.loaddiff.textconv", tool + " diff --textconv");
+        _repo.Write(".gitattributes", "*.loads.json diff=loaddiff\n");
+        File.Copy(CliProcess.Fixture("footbridge", "detailed.loads.json"), Path.Combine(_repo.Path, "deck.loads.json"));
+        Git("add", ".");
+        Git("commit", "-q", "-m", "Deck loads");
+        File.Copy(CliProcess.Fixture("footbridge", "detailed-rev-b.loads.json"), Path.Combine(_repo.Path, "deck.loads.json"), overwrite: true);
+        Git("commit", "-q", "-am", "Revision B");
+    }
+
+    public void Dispose() => _repo.Dispose();
+
+    private (int Exit, string Out, string Err) GitRun(params string[] args)
+    {
+        var psi = new ProcessStartInfo("git") { WorkingDirectory = _repo.Path, RedirectStandardOutput = true, RedirectStandardError = true, UseShellExecute = false };
+        foreach (string a in args)
+        {
+            psi.ArgumentList.Add(a);
+        }
+        // no dependence on the machine's or user's git configuration
+        psi.Environment["GIT_CONFIG_NOSYSTEM"] = "1";
+        psi.Environment["GIT_CONFIG_GLOBAL"] = "/dev/null";
+        psi.Environment["HOME"] = _repo.Path;
+        psi.Environment["GIT_PAGER"] = "cat";
+        psi.Environment["NO_COLOR"] = "1";
+        using var p = Process.Start(psi)!;
+        Task<string> err = p.StandardError.ReadToEndAsync();
+        string output = p.StandardOutput.ReadToEnd();
+        p.WaitForExit();
+        return (p.ExitCode, output, err.Result);
+    }
+
+    private string Git(params string[] args)
+    {
+        var (exit, output, err) = GitRun(args);
+        Assert.True(exit == 0, $"git {string.Join(' ', args)} exited {exit}: {err}");
+        return output;
+    }
+
+    [Fact]
+    public void Git_diff_shows_the_semantic_diff_through_the_external_driver()
+    {
+        string output = Git("diff", "HEAD~1", "HEAD");
+        Assert.Contains("loaddiff diff a/deck.loads.json b/deck.loads.json", output);
+        Assert.Contains("~ changed  rear-left (force)", output);
+        Assert.Contains("value: [0, 0, -20] → [0, 0, -22] kN", output);
+        Assert.Contains("+ added    lighting-column (force)", output);
+        Assert.Contains("Differences: 3 items changed, 1 added, 0 removed", output);
+    }
+
+    [Fact]
+    public void Git_log_p_shows_canonical_listings_and_resultants_through_textconv()
+    {
+        string output = Git("log", "-p", "--format=commit %s");
+        Assert.Contains("commit Revision B", output);
+        // textconv: the canonical listing, so the spelling "1.0e3" of the new file shows as 1000, and the resultants
+        Assert.Contains("+        { \"id\": \"water-tank\", \"kind\": \"mass\", \"at\": [12, 0, 1.2], \"value\": 1000 }", output);
+        Assert.Contains("-        { \"id\": \"water-tank\", \"kind\": \"mass\", \"at\": [12, 0, 1.2], \"value\": 800 }", output);
+        Assert.Contains("+// case vehicle: R = [0, 0, -73.80665]", output);
+        Assert.DoesNotContain("Revision B: the owner", output); // comments are not part of the listing
+        string ext = Git("log", "-p", "--ext-diff", "-1", "--format=commit %s");
+        Assert.Contains("~ changed  water-tank (mass)", ext);
+    }
+
+    [Fact]
+    public void Rev_path_operands_are_read_through_git_show()
+    {
+        CliRun run = CliProcess.RunIn(_repo.Path, "diff", "HEAD~1:deck.loads.json", "HEAD:deck.loads.json", "--format", "markdown");
+        Assert.True(run.ExitCode == 1, run.ToString());
+        Assert.Contains("`HEAD~1:deck.loads.json` → `HEAD:deck.loads.json`", run.Stdout);
+        Assert.Contains("water-tank", run.Stdout);
+        CliRun same = CliProcess.RunIn(_repo.Path, "diff", "HEAD:deck.loads.json", "deck.loads.json");
+        Assert.True(same.ExitCode == 0, same.ToString());
+        CliRun missing = CliProcess.RunIn(_repo.Path, "diff", "HEAD~5:deck.loads.json", "deck.loads.json");
+        Assert.Equal(2, missing.ExitCode);
+    }
+
+    [Fact]
+    public void Git_diff_of_a_working_change_with_no_semantic_difference_exits_0_and_says_so()
+    {
+        // reformat the file: same model, different text
+        CliRun fmt = CliProcess.RunIn(_repo.Path, "fmt", "--write", "--drop-comments", "deck.loads.json");
+        Assert.True(fmt.ExitCode == 0, fmt.ToString());
+        var (exit, output, _) = GitRun("diff");
+        Assert.Equal(0, exit);
+        Assert.Contains("No differences", output);
+    }
+}
