@@ -140,7 +140,9 @@ public sealed class LoadDistributor
         }
         ForceCoupleSystem got = acc.ResultAt(Centroid).System;
         Vector3 dF = s.Force - got.Force, dM = s.Moment - got.Moment;
-        double fs = Math.Max(forceScale, s.Force.Length), ms = Math.Max(momentScale, s.Moment.Length);
+        // A pure couple has no force scale of its own: its forces are of size M/ℓ, and so is their rounding.
+        double ms = Math.Max(momentScale, s.Moment.Length);
+        double fs = Math.Max(Math.Max(forceScale, s.Force.Length), ms / LengthScale);
         bool feasible = dF.Length <= FeasibilityTolerance * fs && dM.Length <= FeasibilityTolerance * Math.Max(ms, fs * LengthScale);
         return new Distribution(forces, couples, Rank, feasible ? Vector3.Zero : dF, feasible ? Vector3.Zero : dM, feasible);
     }
