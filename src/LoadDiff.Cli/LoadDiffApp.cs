@@ -15,6 +15,8 @@ public static class LoadDiffApp
         {
             ReduceCommand.Build(),
             CheckCommand.Build(),
+            SectionsCommand.Build(),
+            DistributeCommand.Build(),
         };
         return root;
     }

@@ -84,7 +84,14 @@ public static class SectionProfile
         }
         else
         {
-            set.UnionWith(boundaries);
+            // An even station a few ulps from a boundary would show the load on the wrong side of a near-duplicate
+            // station: the boundary replaces it.
+            double near = 1e-9 * Math.Max(to - from, Math.Max(Math.Abs(from), Math.Abs(to)));
+            foreach (double b in boundaries)
+            {
+                set.RemoveWhere(x => x != b && Math.Abs(x - b) <= near);
+                set.Add(b);
+            }
         }
         return [.. set];
     }

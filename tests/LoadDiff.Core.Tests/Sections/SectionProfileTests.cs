@@ -149,4 +149,14 @@ public partial class SectionProfileTests
         Assert.True(all);
         Assert.Equal([0, 0.7, 1, 2], s);
     }
+
+    [Fact]
+    public void Stations_evenStationWithinRoundingOfABoundary_isReplacedByTheBoundary()
+    {
+        // 0.2 + 3.6·5/8 rounds to 2.0000000000000004; the point load at exactly 2 must not be split off a twin station.
+        var f = new PointForce("p", V(2, 0, 0), V(0, 0, -1));
+        IReadOnlyList<double> s = SectionProfile.Stations(AlongX, 0.2, 3.8, 9, [f], out _);
+        Assert.Single(s, x => Math.Abs(x - 2) < 1e-6);
+        Assert.Contains(2.0, s);
+    }
 }
