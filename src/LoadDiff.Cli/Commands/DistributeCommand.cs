@@ -123,7 +123,8 @@ public static class DistributeCommand
                 };
                 throw new UsageException(
                     $"case '{name}': the points of {pointsPath} cannot carry this load: the equilibrium equations have rank {distributor.Rank} of 6{geometry}; "
-                    + $"the part that cannot be carried is a force {NumberText.Readable(d.UncarriedForce)} {u} and a moment {NumberText.Readable(d.UncarriedMoment)} {m} "
+                    + $"the part that cannot be carried is a force {NumberText.Readable(d.UncarriedForce, LoadDistributor.FeasibilityTolerance * r.GrossForce)} {u} "
+                    + $"and a moment {NumberText.Readable(d.UncarriedMoment, LoadDistributor.FeasibilityTolerance * r.MomentScale(distributor.Centroid))} {m} "
                     + $"about their centroid {NumberText.Readable(distributor.Centroid)} {l}. Add a point off that line or plane, or give --couples.");
             }
             if (r.GrossForce == 0 && r.GrossCouple > 0)
