@@ -127,9 +127,9 @@ public static class DistributeCommand
                     + $"and a moment {NumberText.Readable(d.UncarriedMoment, LoadDistributor.FeasibilityTolerance * r.MomentScale(distributor.Centroid))} {m} "
                     + $"about their centroid {NumberText.Readable(distributor.Centroid)} {l}. Add a point off that line or plane, or give --couples.");
             }
-            if (r.GrossForce == 0 && r.GrossCouple > 0)
+            if (r.GrossCouple > 0 && r.GrossForce * distributor.LengthScale <= 1e-10 * r.GrossCouple)
             {
-                error.WriteLine($"loaddiff: note: case '{name}' has no forces, only couples, so 'check' allows |ΔR| = 0 exactly and the rounding of the "
+                error.WriteLine($"loaddiff: note: case '{name}' has (next to) no forces, only couples, so 'check' allows |ΔR| ≈ 0 and the rounding of the "
                     + "cancelling forces written here can fail it; give check a small --force-tol (for example 1e-9) for this case");
             }
             var items = new List<LoadItem>();
