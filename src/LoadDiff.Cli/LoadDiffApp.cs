@@ -16,6 +16,8 @@ public static class LoadDiffApp
             ReduceCommand.Build(),
             CheckCommand.Build(),
             DiffCommand.Build(), FmtCommand.Build(),
+            SectionsCommand.Build(),
+            DistributeCommand.Build(),
         };
         return root;
     }

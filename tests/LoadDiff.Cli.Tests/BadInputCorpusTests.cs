@@ -16,7 +16,7 @@ public partial class BadInputCorpusTests
 
     // Codes without a corpus file: they need a missing file or inputs far over a size limit (see the README).
     private static readonly string[] CodesWithoutCorpusFile =
-        [Codes.FileUnreadable, Codes.FileTooLarge, Codes.TooManyItems, Codes.LineTooLong];
+        [Codes.FileUnreadable, Codes.FileTooLarge, Codes.TooManyItems, Codes.LineTooLong, Codes.NoSupportPoints];
 
     /// <summary>The naming rule of the corpus: <c>LD*.loads.json</c> and <c>LD*-direct-*.csv</c> are run; other CSVs are helpers.</summary>
     public static bool IsRunnable(string name) =>

@@ -7,6 +7,7 @@ using LoadDiff.Core.Model;
 using LoadDiff.Core.Reduction;
 using LoadDiff.Formats.Csv;
 using LoadDiff.Formats.Tests.Support;
+using CollectingSink = LoadDiff.Formats.Tests.Support.CollectingSink;
 
 namespace LoadDiff.Formats.Tests;
 

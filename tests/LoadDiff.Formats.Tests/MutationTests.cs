@@ -2,6 +2,7 @@ using CsCheck;
 using LoadDiff.Core.Model;
 using LoadDiff.Formats.Diagnostics;
 using LoadDiff.Formats.Tests.Support;
+using CollectingSink = LoadDiff.Formats.Tests.Support.CollectingSink;
 
 namespace LoadDiff.Formats.Tests;
 

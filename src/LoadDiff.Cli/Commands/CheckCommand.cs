@@ -29,6 +29,7 @@ public static class CheckCommand
         var units = CommonOptions.Units();
         var input = new InputOptions();
         var report = new Option<string?>("--report") { Description = "Also write a Markdown report to this file (.md).", HelpName = "FILE.md" };
+        var sectionGate = new SectionGate();
         var command = new Command("check",
             "Check that SUBSTITUTE is statically equivalent to ORIGINAL for every load case and combination: "
             + "pass iff |ΔR| ≤ max(F, rel·G_F) and |ΔM| ≤ max(M, rel·G_M) at every corner of the bounding box of both "
@@ -37,6 +38,7 @@ public static class CheckCommand
             + "Example:\n  loaddiff check fixtures/footbridge/detailed.loads.json fixtures/footbridge/simplified.loads.json --rel-tol 1e-4")
         {
             original, substitute, at, rel, forceTol, momentTol, cases, format, units, report,
+            sectionGate.Axis, sectionGate.Tolerance,
         };
         input.AddTo(command);
         command.SetAction(parse =>
@@ -48,6 +50,7 @@ public static class CheckCommand
             {
                 throw new UsageException("only one of ORIGINAL and SUBSTITUTE can be read from standard input");
             }
+            sectionGate.Validate(parse, originalPath, substitutePath);
             string? reportPath = parse.GetValue(report);
             if (reportPath is not null && !reportPath.EndsWith(".md", StringComparison.OrdinalIgnoreCase))
             {
@@ -77,7 +80,8 @@ public static class CheckCommand
                     CheckMarkdownRenderer.Write(result, writer);
                 });
             }
-            return result.Equivalent ? ExitCodes.Success : ExitCodes.Different;
+            bool sectionsPass = sectionGate.Run(parse, originalPath, substitutePath, a.Units, selected, parse.GetValue(format)!, output, error);
+            return result.Equivalent && sectionsPass ? ExitCodes.Success : ExitCodes.Different;
         });
         return command;
     }

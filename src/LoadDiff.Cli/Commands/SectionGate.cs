@@ -1,0 +1,101 @@
+using System.CommandLine;
+using LoadDiff.Core;
+using LoadDiff.Core.Sections;
+using LoadDiff.Core.Units;
+using LoadDiff.Reports;
+using LoadDiff.Reports.Sections;
+
+namespace LoadDiff.Cli.Commands;
+
+/// <summary>
+/// The optional gate of <c>check</c> on internal effects: <c>--sections AXIS --section-tol REL</c> fails a case when the
+/// cut-side moment of the substitute deviates anywhere along the axis by more than REL of the original's peak cut moment.
+/// The files are read a second time with every item in memory, only when the gate is asked for.
+/// </summary>
+public sealed class SectionGate
+{
+    /// <summary>--sections AXIS.</summary>
+    public Option<Vector3?> Axis { get; } = SectionOptions.Axis("--sections",
+        "Also gate on internal effects: cut along this axis (x, y, z or dx,dy,dz, origin 0,0,0, over the extent of the loads) and fail "
+        + "when the cut-side moment deviates by more than --section-tol of the original's peak. Needs --section-tol.", required: false);
+
+    /// <summary>--section-tol REL.</summary>
+    public Option<double?> Tolerance { get; } = new("--section-tol")
+    {
+        Description = "Allowed largest cut-side moment deviation as a fraction of the original's peak cut moment, for --sections "
+            + "(no default: no published figure exists, choose it for the member at hand).",
+        HelpName = "REL",
+        CustomParser = r =>
+        {
+            string s = r.Tokens.Count > 0 ? r.Tokens[0].Value : "";
+            if (CommonOptions.TryParseFinite(s, out double v) && v >= 0)
+            {
+                return v;
+            }
+            r.AddError($"--section-tol '{s}': expected a finite number ≥ 0 with a point as decimal separator");
+            return null;
+        },
+    };
+
+    /// <summary>Rejects inconsistent gate options before anything is written.</summary>
+    /// <exception cref="UsageException">One of the two options without the other, or standard input as an operand.</exception>
+    public void Validate(ParseResult parse, string originalPath, string substitutePath)
+    {
+        ArgumentNullException.ThrowIfNull(parse);
+        bool axis = parse.GetValue(Axis) is not null, tolerance = parse.GetValue(Tolerance) is not null;
+        if (tolerance && !axis)
+        {
+            throw new UsageException("--section-tol needs --sections AXIS");
+        }
+        if (axis && !tolerance)
+        {
+            throw new UsageException("--sections needs --section-tol REL (the allowed moment deviation as a fraction of the original's peak)");
+        }
+        if (axis && (originalPath == "-" || substitutePath == "-"))
+        {
+            throw new UsageException("--sections reads the files a second time and cannot be used with standard input");
+        }
+    }
+
+    /// <summary>
+    /// Runs the gate when asked for and reports it: after the check's text or Markdown on <paramref name="output"/>, and on
+    /// <paramref name="error"/> for JSON and JUnit so those stay valid documents. True when it passes or was not asked for.
+    /// </summary>
+    public bool Run(ParseResult parse, string originalPath, string substitutePath, UnitSystem units,
+        IReadOnlyCollection<string> selected, string format, TextWriter output, TextWriter error)
+    {
+        ArgumentNullException.ThrowIfNull(parse);
+        ArgumentNullException.ThrowIfNull(output);
+        ArgumentNullException.ThrowIfNull(error);
+        Vector3? direction = parse.GetValue(Axis);
+        double? tolerance = parse.GetValue(Tolerance);
+        Validate(parse, originalPath, substitutePath);
+        if (direction is null || tolerance is not { } rel)
+        {
+            return true;
+        }
+        CollectedFile a = CollectedFile.Read(originalPath, units, error);
+        CollectedFile b = CollectedFile.Read(substitutePath, units, error);
+        var axis = SectionAxis.Create(Vector3.Zero, direction.Value);
+        SectionsResult result = SectionsCommand.Compute(a, b, axis, null, null, SectionOptions.DefaultStations, selected, error);
+        TextWriter w = format is "text" or "markdown" ? output : error;
+        string m = units.MomentSymbol, l = units.Length.Symbol;
+        w.WriteLine();
+        w.WriteLine($"Section-cut gate along e1 = {NumberText.Readable(axis.Direction)} through the origin: fail when the largest |ΔM(s)| exceeds "
+            + $"{NumberText.Readable(rel)} of the original's peak |M(s)|");
+        bool pass = true;
+        int width = result.Entries.Max(e => e.Name.Length);
+        foreach (SectionsEntry e in result.Entries)
+        {
+            SectionComparison c = e.Comparison;
+            double allowed = rel * c.OriginalPeakMoment;
+            bool ok = c.MaxMomentDeviation <= allowed;
+            pass &= ok;
+            w.WriteLine($"  {e.Name.PadRight(width)}  {(ok ? "PASS" : "FAIL")}  largest |ΔM| = {NumberText.Readable(c.MaxMomentDeviation)} {m} at s = "
+                + $"{NumberText.Readable(c.MaxMomentDeviationAt)} {l}; allowed {NumberText.Readable(allowed)} {m} (peak {NumberText.Readable(c.OriginalPeakMoment)} {m})");
+        }
+        w.WriteLine(pass ? "Section-cut gate: PASS" : "Section-cut gate: FAIL — the substitute changes the internal effects by more than allowed.");
+        w.WriteLine(SectionsResult.SectionCaution);
+        return pass;
+    }
+}

@@ -1,0 +1,141 @@
+using System.Globalization;
+using System.Text.Json;
+using System.Xml.Linq;
+using LoadDiff.Cli.Tests.Support;
+
+namespace LoadDiff.Cli.Tests;
+
+public class SectionsCommandTests
+{
+    // A 10 m simple span under 7 kN/m with its reactions, against the single resultant at mid-span
+    // (AISC Manual, Beam Diagrams and Formulas, Case 1: reactions wl/2, M_max = wl²/8 = 87.5 kN·m).
+    private const string Uniform = """
+        { "units": { "force": "kN", "length": "m" }, "cases": { "dead": { "loads": [
+          { "id": "R1", "kind": "force", "at": [0, 0, 0], "value": [0, 0, 35] },
+          { "id": "udl", "kind": "line", "from": [0, 0, 0], "to": [10, 0, 0], "start": [0, 0, -7], "end": [0, 0, -7] },
+          { "id": "R2", "kind": "force", "at": [10, 0, 0], "value": [0, 0, 35] } ] } } }
+        """;
+
+    private const string Resultant = """
+        { "units": { "force": "kN", "length": "m" }, "cases": { "dead": { "loads": [
+          { "id": "R1", "kind": "force", "at": [0, 0, 0], "value": [0, 0, 35] },
+          { "id": "P", "kind": "force", "at": [5, 0, 0], "value": [0, 0, -70] },
+          { "id": "R2", "kind": "force", "at": [10, 0, 0], "value": [0, 0, 35] } ] } } }
+        """;
+
+    [Fact]
+    public void Json_uniform_load_against_its_resultant_peaks_at_wl2_over_8_at_mid_span()
+    {
+        using var dir = new TempFolder();
+        string a = dir.Write("udl.loads.json", Uniform), b = dir.Write("point.loads.json", Resultant);
+        CliRun run = CliProcess.Run("sections", a, b, "--axis", "x", "--stations", "4", "--format", "json");
+        Assert.True(run.ExitCode == 0, run.ToString());
+        using JsonDocument doc = JsonDocument.Parse(run.Stdout);
+        JsonElement root = doc.RootElement;
+        Assert.Equal(1, root.GetProperty("schema_version").GetInt32());
+        Assert.Equal([1.0, 0, 0], root.GetProperty("axis").EnumerateArray().Select(x => x.GetDouble()));
+        Assert.Equal([0.0, 0, 0], root.GetProperty("origin").EnumerateArray().Select(x => x.GetDouble()));
+        // wl²/8 = 7·100/8 (same source), absolute and, against the original's own peak wl²/8, relative 1.
+        Assert.Equal(87.5, root.GetProperty("max_moment_deviation").GetDouble(), 10);
+        Assert.Equal(5, root.GetProperty("max_moment_deviation_at").GetDouble());
+        Assert.Equal(1, root.GetProperty("max_moment_deviation_relative").GetDouble(), 12);
+        Assert.True(root.TryGetProperty("max_force_deviation", out _));
+        Assert.True(root.TryGetProperty("max_force_deviation_at", out _));
+        Assert.True(root.TryGetProperty("max_force_deviation_relative", out _));
+        JsonElement[] stations = [.. root.GetProperty("stations").EnumerateArray()];
+        // Four even stations 0, 3.33, 6.67, 10 plus the resultant's point 5 (an item boundary).
+        Assert.Equal([0.0, 10.0 / 3, 5, 20.0 / 3, 10], stations.Select(s => s.GetProperty("s").GetDouble()));
+        foreach (JsonElement s in stations)
+        {
+            Assert.Equal(3, s.GetProperty("original").GetProperty("force").GetArrayLength());
+            Assert.Equal(3, s.GetProperty("substitute").GetProperty("moment").GetArrayLength());
+        }
+        // Left of mid-span the simple-beam moment wlx/2 − wx²/2 (same source) at x = 10/3: 35·10/3 − 3.5·100/9.
+        double x = 10.0 / 3;
+        Assert.Equal((35 * x) - (3.5 * x * x), stations[1].GetProperty("original").GetProperty("moment")[1].GetDouble(), 10);
+        Assert.Equal("dead", root.GetProperty("cases")[0].GetProperty("name").GetString());
+    }
+
+    [Fact]
+    public void Svg_chart_is_well_formed_and_labelled_with_units()
+    {
+        using var dir = new TempFolder();
+        string a = dir.Write("udl.loads.json", Uniform), b = dir.Write("point.loads.json", Resultant);
+        CliRun run = CliProcess.Run("sections", a, b, "--axis", "x", "--format", "svg");
+        Assert.True(run.ExitCode == 0, run.ToString());
+        XDocument svg = XDocument.Parse(run.Stdout);
+        XNamespace ns = "http://www.w3.org/2000/svg";
+        Assert.Equal(ns + "svg", svg.Root!.Name);
+        // Two panels (force, moment), each with a solid original and a dashed substitute line for the non-zero component.
+        Assert.Equal(4, svg.Descendants(ns + "polyline").Count());
+        Assert.Equal(2, svg.Descendants(ns + "polyline").Count(p => p.Attribute("stroke-dasharray") is not null));
+        string text = string.Concat(svg.Descendants(ns + "text").Select(t => t.Value + "\n"));
+        Assert.Contains("V (kN)", text);
+        Assert.Contains("M (kN·m)", text);
+        Assert.Contains("station s (m)", text);
+    }
+
+    [Fact]
+    public void Text_shows_the_deviation_and_the_caution()
+    {
+        using var dir = new TempFolder();
+        string a = dir.Write("udl.loads.json", Uniform), b = dir.Write("point.loads.json", Resultant);
+        CliRun run = CliProcess.Run("sections", a, b, "--axis", "1,0,0", "--from", "0", "--to", "10", "--stations", "3");
+        Assert.True(run.ExitCode == 0, run.ToString());
+        Assert.Contains("largest |ΔM| = 87.5 kN·m at s = 5 m", run.Stdout);
+        Assert.Contains("Saint-Venant", run.Stdout);
+    }
+
+    [Fact]
+    public void Bad_axis_and_unknown_case_exit_2_with_one_message()
+    {
+        using var dir = new TempFolder();
+        string a = dir.Write("udl.loads.json", Uniform), b = dir.Write("point.loads.json", Resultant);
+        CliRun zero = CliProcess.Run("sections", a, b, "--axis", "0,0,0");
+        Assert.Equal(2, zero.ExitCode);
+        Assert.Contains("--axis '0,0,0'", zero.Stderr);
+        CliRun unknown = CliProcess.Run("sections", a, b, "--axis", "x", "--case", "live");
+        Assert.Equal(2, unknown.ExitCode);
+        Assert.Contains("--case 'live'", unknown.Stderr);
+        Assert.DoesNotContain("   at ", unknown.Stderr);
+    }
+
+    [Fact]
+    public void Check_section_gate_fails_the_single_resultant_and_passes_the_load_itself()
+    {
+        using var dir = new TempFolder();
+        string a = dir.Write("udl.loads.json", Uniform), b = dir.Write("point.loads.json", Resultant);
+        // Statically equivalent, so check alone passes (exit 0) …
+        Assert.Equal(0, CliProcess.Run("check", a, b).ExitCode);
+        // … but the cut moment deviates by wl²/8, 100 % of the original's peak: a 10 % gate fails it.
+        CliRun gated = CliProcess.Run("check", a, b, "--sections", "x", "--section-tol", "0.1");
+        Assert.True(gated.ExitCode == 1, gated.ToString());
+        Assert.Contains("Result: EQUIVALENT", gated.Stdout);
+        Assert.Contains("Section-cut gate: FAIL", gated.Stdout);
+        Assert.Equal(0, CliProcess.Run("check", a, a, "--sections", "x", "--section-tol", "0.1").ExitCode);
+        // JSON stays a valid document; the gate's report goes to standard error.
+        CliRun json = CliProcess.Run("check", a, b, "--sections", "x", "--section-tol", "0.1", "--format", "json");
+        Assert.Equal(1, json.ExitCode);
+        using JsonDocument doc = JsonDocument.Parse(json.Stdout);
+        Assert.True(doc.RootElement.GetProperty("equivalent").GetBoolean());
+        Assert.Contains("Section-cut gate: FAIL", json.Stderr);
+        // One option without the other is a usage error.
+        Assert.Equal(2, CliProcess.Run("check", a, b, "--sections", "x").ExitCode);
+        Assert.Equal(2, CliProcess.Run("check", a, b, "--section-tol", "0.1").ExitCode);
+    }
+
+    [Fact]
+    public void Footbridge_vehicle_case_cut_along_the_span_matches_at_the_ends()
+    {
+        CliRun run = CliProcess.Run("sections", CliProcess.Fixture("footbridge", "detailed.loads.json"),
+            CliProcess.Fixture("footbridge", "simplified.loads.json"), "--axis", "x", "--case", "vehicle", "--format", "json");
+        Assert.True(run.ExitCode == 0, run.ToString());
+        using JsonDocument doc = JsonDocument.Parse(run.Stdout);
+        JsonElement last = doc.RootElement.GetProperty("stations").EnumerateArray().Last();
+        double Dev(string k) => last.GetProperty(k).GetDouble();
+        // Past every load both reduce to their (equal) resultants about the same point; the tank is 1.2 m higher
+        // in the detailed file, which does not matter for a vertical force.
+        Assert.True(Dev("force_deviation") < 1e-9, Dev("force_deviation").ToString(CultureInfo.InvariantCulture));
+        Assert.True(Dev("moment_deviation") < 1e-9, Dev("moment_deviation").ToString(CultureInfo.InvariantCulture));
+    }
+}
