@@ -56,6 +56,7 @@ public static class LoadFileReader
             {
                 throw Fail(Codes.FileUnreadable, "cannot read the file: " + e.Message, path);
             }
+            options.BytesRead?.Invoke(data.Length);
             return ReadJsonBytes(data, path, dir, sink, options, warnings);
         }
         catch (InputError e)

@@ -6,6 +6,7 @@ using LoadDiff.Core.Model;
 using LoadDiff.Core.Reduction;
 using LoadDiff.Core.Units;
 using LoadDiff.Reports;
+using LoadDiff.Reports.Html;
 
 namespace LoadDiff.Cli.Commands;
 
@@ -27,7 +28,7 @@ public static class CheckCommand
         var cases = CommonOptions.Cases();
         var format = CommonOptions.Format("text", "json", "markdown", "junit");
         var units = CommonOptions.Units();
-        var report = new Option<string?>("--report") { Description = "Also write a Markdown report to this file (.md).", HelpName = "FILE.md" };
+        var report = new Option<string?>("--report") { Description = ReportFile.Description, HelpName = "FILE.md|FILE.html" };
         var command = new Command("check",
             "Check that SUBSTITUTE is statically equivalent to ORIGINAL for every load case and combination: "
             + "pass iff |ΔR| ≤ max(F, rel·G_F) and |ΔM| ≤ max(M, rel·G_M) at every corner of the bounding box of both "
@@ -47,13 +48,11 @@ public static class CheckCommand
                 throw new UsageException("only one of ORIGINAL and SUBSTITUTE can be read from standard input");
             }
             string? reportPath = parse.GetValue(report);
-            if (reportPath is not null && !reportPath.EndsWith(".md", StringComparison.OrdinalIgnoreCase))
-            {
-                throw new UsageException($"--report '{reportPath}': this version writes Markdown reports (.md)");
-            }
+            ReportFile.Validate(reportPath);
+            SketchSink? sketchA = ReportFile.SketchFor(reportPath), sketchB = ReportFile.SketchFor(reportPath);
             UnitSystem? requested = parse.GetValue(units) is { } u ? new UnitSystem(u.Force, u.Length, UnitCatalog.Kilogram) : null;
-            LoadedFile a = LoadedFile.Read(originalPath, requested, error, ContributorCount);
-            LoadedFile b = LoadedFile.Read(substitutePath, a.Units, error, ContributorCount);
+            LoadedFile a = LoadedFile.Read(originalPath, requested, error, ContributorCount, sketchA);
+            LoadedFile b = LoadedFile.Read(substitutePath, a.Units, error, ContributorCount, sketchB);
             var tolerance = ToleranceSpec.Create(parse.GetValue(rel), parse.GetValue(forceTol), parse.GetValue(momentTol));
             string[] selected = parse.GetValue(cases) ?? [];
             foreach (string name in selected)
@@ -69,11 +68,7 @@ public static class CheckCommand
             Render(result, parse.GetValue(format)!, output);
             if (reportPath is not null)
             {
-                AtomicFile.Write(reportPath, [originalPath, substitutePath], s =>
-                {
-                    using var writer = new StreamWriter(s, new System.Text.UTF8Encoding(false), leaveOpen: true);
-                    CheckMarkdownRenderer.Write(result, writer);
-                });
+                ReportFile.WriteCheck(reportPath, result, a, b, sketchA, sketchB);
             }
             return result.Equivalent ? ExitCodes.Success : ExitCodes.Different;
         });

@@ -319,6 +319,7 @@ internal sealed class LoadJsonWalker
         {
             throw Error(node, path, Codes.ReferencedFileMissing, $"referenced file '{rel}' does not exist");
         }
+        _options.ReferencedFileOpened?.Invoke(full, DisplayPath(rel));
         return CsvLoadReader.Open(full, DisplayPath(rel), _options);
     }
 
