@@ -124,24 +124,15 @@ public static class HtmlReportCheck
         SystemSketch? so = isCase ? original?.Case(c.Name) : null;
         SystemSketch? ss = isCase ? substitute?.Case(c.Name) : null;
         var frames = HtmlReportDrawings.Frames(box, r.ReferencePoint);
-        var present = new List<SystemSketch>();
+        double bandMax = Math.Max(so?.MaxPressure ?? 0, ss?.MaxPressure ?? 0);
+        HtmlReportDrawings.Legend(w, check: true, new PressureBands(bandMax), r.Units);
         if (so is not null)
         {
-            present.Add(so);
+            HtmlReportDrawings.SystemRow(w, "Original: " + r.OriginalPath, so, "orig", frames, new SketchScales(so, bandMax), r.ReferencePoint, r.Units);
         }
         if (ss is not null)
         {
-            present.Add(ss);
-        }
-        var scales = present.Count > 0 ? new SketchScales(present) : null;
-        HtmlReportDrawings.Legend(w, check: true, scales, r.Units);
-        if (so is not null)
-        {
-            HtmlReportDrawings.SystemRow(w, "Original: " + r.OriginalPath, so, "orig", frames, scales!, r.ReferencePoint, r.Units);
-        }
-        if (ss is not null)
-        {
-            HtmlReportDrawings.SystemRow(w, "Substitute: " + r.SubstitutePath, ss, "subs", frames, scales!, r.ReferencePoint, r.Units);
+            HtmlReportDrawings.SystemRow(w, "Substitute: " + r.SubstitutePath, ss, "subs", frames, new SketchScales(ss, bandMax), r.ReferencePoint, r.Units);
         }
         if (!isCase)
         {

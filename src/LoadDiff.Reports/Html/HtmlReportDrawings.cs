@@ -82,10 +82,10 @@ internal static class HtmlReportDrawings
     }
 
     /// <summary>The legend of line styles, symbols and pressure bands.</summary>
-    public static void Legend(TextWriter w, bool check, SketchScales? scales, UnitSystem units)
+    public static void Legend(TextWriter w, bool check, PressureBands pressure, UnitSystem units)
     {
         var b = new SvgBuilder();
-        bool bands = scales is not null && scales.Bands.Max > 0;
+        bool bands = pressure.Max > 0;
         double height = bands ? 86 : 48;
         b.Open("svg", $"class=\"legend\" viewBox=\"0 0 960 {SvgBuilder.N(height)}\" role=\"img\" aria-label=\"Legend\"");
         b.Raw("<title>Legend</title>\n");
@@ -125,7 +125,7 @@ internal static class HtmlReportDrawings
         b.Text(x + 14, 39, "P reference point", "lgd");
         if (bands)
         {
-            PressureBands p = scales!.Bands;
+            PressureBands p = pressure;
             b.Text(8, 62, $"pressure bands ({units.Force.Symbol}/{units.Length.Symbol}²):", "lgd");
             double bx = 190;
             const double bw = 50;

@@ -91,7 +91,7 @@ internal static class HtmlReportPage
                 + "The default rel = 0.001 is common practice; no published source for it was found. "
                 + "The residual's own central axis is the line along which the substitute lacks a force −ΔR.</p>");
         }
-        w.WriteLine("<p>Drawings. Both systems of a case share one frame and one scale per quantity (shown under each view), so they compare by eye. "
+        w.WriteLine("<p>Drawings. Both systems of a case share one frame and one set of pressure bands, so positions and pressures compare by eye; the arrows of each system have their own scale, shown under each view (the largest item of each system gets the longest arrow). "
             + "A force along the line of sight is a circle with a cross (pointing away from the viewer) or a dot (towards the viewer). "
             + "Line loads are drawn as intensity diagrams on the side the load comes from; area and mesh pressures as shaded bands with arrows where the view shows their direction. "
             + "Where a case has more items than can be drawn legibly, the largest are drawn and the rest aggregated, as the note under each case says. "

@@ -58,8 +58,8 @@ public static class HtmlReportReduce
             w.WriteLine($"<p>{r.ItemCount.ToString(CultureInfo.InvariantCulture)} item{(r.ItemCount == 1 ? "" : "s")}; reduces to {HtmlText.Escape(Describe.System(e.Wrench, r.AllForcesParallel))}.</p>");
             var frames = HtmlReportDrawings.Frames(r.Bounds, result.ReferencePoint);
             SystemSketch? s = e.Kind == EntryKind.Case ? sketch?.Case(e.Name) : null;
-            SketchScales? scales = s is null ? null : new SketchScales([s]);
-            HtmlReportDrawings.Legend(w, check: false, scales, result.Units);
+            SketchScales? scales = s is null ? null : new SketchScales(s, s.MaxPressure);
+            HtmlReportDrawings.Legend(w, check: false, new PressureBands(s?.MaxPressure ?? 0), result.Units);
             if (s is not null)
             {
                 HtmlReportDrawings.SystemRow(w, "Loads", s, "orig", frames, scales!, result.ReferencePoint, result.Units);

@@ -3,29 +3,23 @@ using System.Globalization;
 namespace LoadDiff.Reports.Html;
 
 /// <summary>
-/// The drawing scales of one case, shared by its views and by both systems so that they compare by eye: pixels per
-/// force unit for point forces, per intensity for line loads, per pressure for areas and meshes, per moment for
-/// couples, and the pressure shading bands.
+/// The drawing scales of one system in one case, shared by its three views: pixels per force unit for point forces,
+/// per intensity for line loads, per pressure for areas and meshes, per moment for couples (each system's largest
+/// item fills the longest arrow, so a lumped substitute does not shrink the detailed loads to nothing), and the
+/// pressure shading bands, which both systems of a case share.
 /// </summary>
 internal sealed class SketchScales
 {
-    public SketchScales(IEnumerable<SystemSketch> sketches)
+    public SketchScales(SystemSketch sketch, double bandMax)
     {
-        double f = 0, w = 0, p = 0, c = 0;
-        foreach (SystemSketch s in sketches)
-        {
-            f = Math.Max(f, s.MaxForce);
-            w = Math.Max(w, s.MaxLineIntensity);
-            p = Math.Max(p, s.MaxPressure);
-            c = Math.Max(c, s.MaxCouple);
-        }
+        double f = sketch.MaxForce, w = sketch.MaxLineIntensity, p = sketch.MaxPressure, c = sketch.MaxCouple;
         MaxForce = f;
         MaxLine = w;
         MaxCouple = c;
         Force = f > 0 ? SketchFrame.ArrowMax / f : 0;
         Line = w > 0 ? SketchFrame.ArrowMax / w : 0;
         Pressure = p > 0 ? SketchFrame.ArrowMax / p : 0;
-        Bands = new PressureBands(p);
+        Bands = new PressureBands(Math.Max(bandMax, p));
     }
 
     public double MaxForce { get; }

@@ -1,3 +1,4 @@
+using System.Globalization;
 using LoadDiff.Core;
 using LoadDiff.Core.Units;
 
@@ -88,13 +89,22 @@ internal static partial class SvgSketch
         foreach ((double apx, string label, bool twoHeads) in bars)
         {
             double w = apx;
+            string text = label;
+            if (w > 60 && label.Split(' ', 2) is [string number, string unit]
+                && double.TryParse(number, NumberStyles.Float, CultureInfo.InvariantCulture, out double value))
+            {
+                // A shorter reference arrow for a round value that fits beside the others.
+                double smaller = SketchScales.Nice(value * 50 / w);
+                w *= smaller / value;
+                text = SketchScales.NiceText(smaller) + " " + unit;
+            }
             Arrow(b, x, sy, x + w, sy, "bar", 4);
             if (twoHeads)
             {
                 Arrow(b, x, sy, x + w - 4, sy, "bar", 4);
             }
-            b.Text(x + w + 3, sy + 3, "= " + label, "sc");
-            x += w + 26 + (label.Length * 5.2);
+            b.Text(x + w + 3, sy + 3, "= " + text, "sc");
+            x += w + 26 + (text.Length * 5.2);
         }
     }
 
