@@ -10,12 +10,16 @@ namespace LoadDiff.Cli;
 /// <summary>A load file read and reduced case by case, with its header; diagnostics go to standard error.</summary>
 public sealed class LoadedFile
 {
-    private LoadedFile(string path, ReductionSink sink, DocumentHeader header)
+    private LoadedFile(string path, ReductionSink sink, DocumentHeader header, IReadOnlyList<(string FullPath, string Display)> referenced)
     {
         Path = path;
         Sink = sink;
         Header = header;
+        ReferencedFiles = referenced;
     }
+
+    /// <summary>The CSV files the load description referenced, in the order they were opened.</summary>
+    public IReadOnlyList<(string FullPath, string Display)> ReferencedFiles { get; }
 
     /// <summary>The file as the user named it.</summary>
     public string Path { get; }
@@ -30,10 +34,31 @@ public sealed class LoadedFile
     public UnitSystem Units => Header.Units;
 
     /// <summary>Reads and reduces a file; prints its warnings and, on failure, its error, then throws <see cref="InputFailureException"/>.</summary>
-    public static LoadedFile Read(string path, UnitSystem? targetUnits, TextWriter error, int topContributors = 0, ReadOptions? options = null)
+    /// <param name="path">The file as the user named it, or - for standard input.</param>
+    /// <param name="targetUnits">Units to convert into; null keeps the file's.</param>
+    /// <param name="error">Standard error: diagnostics, and a progress line when it is a terminal.</param>
+    /// <param name="topContributors">How many of the largest items per case to keep.</param>
+    /// <param name="alsoInto">Another sink fed in the same pass (a report's sketch), or null.</param>
+    /// <param name="options">Reader options from the command line (threads, limits); defaults when null.</param>
+    public static LoadedFile Read(string path, UnitSystem? targetUnits, TextWriter error, int topContributors = 0, ILoadSink? alsoInto = null, ReadOptions? options = null)
     {
+        ArgumentNullException.ThrowIfNull(error);
         var sink = new ReductionSink(topContributors: topContributors);
-        ReadResult result = LoadFileReader.Read(path, sink, (options ?? new ReadOptions()) with { TargetUnits = targetUnits });
+        var referenced = new List<(string, string)>();
+        ReadResult result;
+        using (ProgressDisplay? progress = ProgressDisplay.ForStandardError(error, path))
+        {
+            // A sketch needs the items one by one; the reduction alone takes reduced blocks of large CSV files.
+            ILoadSink target = alsoInto is null && progress is null ? sink
+                : alsoInto is null ? new BlockFanOutSink(progress, sink) : new FanOutSink(progress, sink, alsoInto);
+            ReadOptions chosen = (options ?? new ReadOptions()) with
+            {
+                TargetUnits = targetUnits,
+                BytesRead = progress is null ? null : progress.AddBytes,
+                ReferencedFileOpened = (full, display) => referenced.Add((full, display)),
+            };
+            result = LoadFileReader.Read(path, target, chosen);
+        }
         foreach (Diagnostic d in result.Diagnostics)
         {
             error.WriteLine(d.ToString());
@@ -42,7 +67,7 @@ public sealed class LoadedFile
         {
             throw new InputFailureException(path);
         }
-        return new LoadedFile(path, sink, result.Header);
+        return new LoadedFile(path, sink, result.Header, referenced);
     }
 
     /// <summary>True when the file defines a case or a combination of this name.</summary>

@@ -46,7 +46,9 @@ public static class LoadFileReader
             {
                 return ReadJsonStreamed(path, dir, sink, options, warnings);
             }
-            return ReadJsonBytes(ReadJsonFile(path, options), path, dir, sink, options, warnings);
+            byte[] data = ReadJsonFile(path, options);
+            options.BytesRead?.Invoke(data.Length);
+            return ReadJsonBytes(data, path, dir, sink, options, warnings);
         }
         catch (InputError e)
         {

@@ -37,4 +37,16 @@ public sealed record ReadOptions
 
     /// <summary>Longest CSV line accepted, in characters.</summary>
     public int MaxLineLength { get; init; } = 1 << 20;
+
+    /// <summary>
+    /// Called with a count of bytes each time the reader takes more input: CSV files as they stream, a JSON file once
+    /// it is in memory. For progress displays; null for none.
+    /// </summary>
+    public Action<long>? BytesRead { get; init; }
+
+    /// <summary>
+    /// Called with the full path and the display name of every CSV file a load description references, as it is
+    /// opened; for reports that list (and hash) every input. Null for none.
+    /// </summary>
+    public Action<string, string>? ReferencedFileOpened { get; init; }
 }

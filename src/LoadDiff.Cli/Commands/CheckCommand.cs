@@ -6,6 +6,7 @@ using LoadDiff.Core.Model;
 using LoadDiff.Core.Reduction;
 using LoadDiff.Core.Units;
 using LoadDiff.Reports;
+using LoadDiff.Reports.Html;
 
 namespace LoadDiff.Cli.Commands;
 
@@ -28,7 +29,7 @@ public static class CheckCommand
         var format = CommonOptions.Format("text", "json", "markdown", "junit");
         var units = CommonOptions.Units();
         var input = new InputOptions();
-        var report = new Option<string?>("--report") { Description = "Also write a Markdown report to this file (.md).", HelpName = "FILE.md" };
+        var report = new Option<string?>("--report") { Description = ReportFile.Description, HelpName = "FILE.md|FILE.html" };
         var sectionGate = new SectionGate();
         var command = new Command("check",
             "Check that SUBSTITUTE is statically equivalent to ORIGINAL for every load case and combination: "
@@ -52,13 +53,11 @@ public static class CheckCommand
             }
             sectionGate.Validate(parse, originalPath, substitutePath);
             string? reportPath = parse.GetValue(report);
-            if (reportPath is not null && !reportPath.EndsWith(".md", StringComparison.OrdinalIgnoreCase))
-            {
-                throw new UsageException($"--report '{reportPath}': this version writes Markdown reports (.md)");
-            }
+            ReportFile.Validate(reportPath);
+            SketchSink? sketchA = ReportFile.SketchFor(reportPath), sketchB = ReportFile.SketchFor(reportPath);
             UnitSystem? requested = parse.GetValue(units) is { } u ? new UnitSystem(u.Force, u.Length, UnitCatalog.Kilogram) : null;
-            LoadedFile a = LoadedFile.Read(originalPath, requested, error, ContributorCount, input.From(parse));
-            LoadedFile b = LoadedFile.Read(substitutePath, a.Units, error, ContributorCount, input.From(parse));
+            LoadedFile a = LoadedFile.Read(originalPath, requested, error, ContributorCount, sketchA, input.From(parse));
+            LoadedFile b = LoadedFile.Read(substitutePath, a.Units, error, ContributorCount, sketchB, input.From(parse));
             var tolerance = ToleranceSpec.Create(parse.GetValue(rel), parse.GetValue(forceTol), parse.GetValue(momentTol));
             string[] selected = parse.GetValue(cases) ?? [];
             foreach (string name in selected)
@@ -74,11 +73,7 @@ public static class CheckCommand
             Render(result, parse.GetValue(format)!, output);
             if (reportPath is not null)
             {
-                AtomicFile.Write(reportPath, [originalPath, substitutePath], s =>
-                {
-                    using var writer = new StreamWriter(s, new System.Text.UTF8Encoding(false), leaveOpen: true);
-                    CheckMarkdownRenderer.Write(result, writer);
-                });
+                ReportFile.WriteCheck(reportPath, result, a, b, sketchA, sketchB);
             }
             bool sectionsPass = sectionGate.Run(parse, originalPath, substitutePath, a.Units, selected, parse.GetValue(format)!, output, error);
             return result.Equivalent && sectionsPass ? ExitCodes.Success : ExitCodes.Different;

@@ -4,6 +4,7 @@ using LoadDiff.Core.Model;
 using LoadDiff.Core.Reduction;
 using LoadDiff.Core.Units;
 using LoadDiff.Reports;
+using LoadDiff.Reports.Html;
 
 namespace LoadDiff.Cli.Commands;
 
@@ -19,12 +20,13 @@ public static class ReduceCommand
         var format = CommonOptions.Format("text", "json", "markdown");
         var units = CommonOptions.Units();
         var input = new InputOptions();
+        var report = new Option<string?>("--report") { Description = ReportFile.Description, HelpName = "FILE.md|FILE.html" };
         var command = new Command("reduce",
             "Reduce each load case and combination to its resultant force and moment about one point, with the wrench "
             + "(pitch, central axis, minimum couple) and the single-force line of action where one exists.\n\n"
             + "Example:\n  loaddiff reduce fixtures/footbridge/detailed.loads.json --at centroid --format json")
         {
-            file, cases, at, format, units,
+            file, cases, at, format, units, report,
         };
         input.AddTo(command);
         command.SetAction(parse =>
@@ -32,7 +34,10 @@ public static class ReduceCommand
             TextWriter output = parse.InvocationConfiguration.Output;
             TextWriter error = parse.InvocationConfiguration.Error;
             UnitSystem? target = parse.GetValue(units) is { } u ? new UnitSystem(u.Force, u.Length, UnitCatalog.Kilogram) : null;
-            LoadedFile loaded = LoadedFile.Read(parse.GetValue(file)!, target, error, options: input.From(parse));
+            string? reportPath = parse.GetValue(report);
+            ReportFile.Validate(reportPath);
+            SketchSink? sketch = ReportFile.SketchFor(reportPath);
+            LoadedFile loaded = LoadedFile.Read(parse.GetValue(file)!, target, error, alsoInto: sketch, options: input.From(parse));
             string[] selected = parse.GetValue(cases) ?? [];
             foreach (string name in selected)
             {
@@ -58,6 +63,10 @@ public static class ReduceCommand
                 default:
                     ReduceTextRenderer.Write(result, output);
                     break;
+            }
+            if (reportPath is not null)
+            {
+                ReportFile.WriteReduce(reportPath, result, loaded, sketch);
             }
             return ExitCodes.Success;
         });

@@ -100,6 +100,7 @@ internal sealed class BlockCsvReducer
                         eof = true;
                     }
                     length += read;
+                    _options.BytesRead?.Invoke(read);
                 }
                 int end = length;
                 if (!eof)

@@ -39,7 +39,11 @@ internal sealed class CsvLoadReader
         }
         try
         {
-            var stream = new FileStream(path, FileMode.Open, FileAccess.Read, FileShare.Read, 1 << 16, FileOptions.SequentialScan);
+            Stream stream = new FileStream(path, FileMode.Open, FileAccess.Read, FileShare.Read, 1 << 16, FileOptions.SequentialScan);
+            if (options.BytesRead is { } progress)
+            {
+                stream = new CountingStream(stream, progress);
+            }
             var text = new StreamReader(stream, new System.Text.UTF8Encoding(false, throwOnInvalidBytes: true), true, 1 << 16);
             return new CsvRowReader(text, display, options.MaxLineLength, path);
         }

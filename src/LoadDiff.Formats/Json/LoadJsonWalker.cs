@@ -356,6 +356,7 @@ internal sealed class LoadJsonWalker
         {
             throw Error(node, path, Codes.ReferencedFileMissing, $"referenced file '{rel}' does not exist");
         }
+        _options.ReferencedFileOpened?.Invoke(full, DisplayPath(rel));
         return (full, DisplayPath(rel));
     }
 
