@@ -52,6 +52,12 @@ public static class LoadDiffApp
             error.WriteLine("loaddiff: " + e.Message);
             return ExitCodes.InputError;
         }
+        catch (OverflowException)
+        {
+            // Inputs are limited to 1e100, but products of them (moments, the wrench axis) can still pass the range of double.
+            error.WriteLine("loaddiff: a result overflowed the range of double: the loads or coordinates are too large for the units used; choose units that bring the numbers nearer to 1");
+            return ExitCodes.InputError;
+        }
         catch (IOException e)
         {
             error.WriteLine("loaddiff: " + e.Message);

@@ -9,5 +9,9 @@ catch (Exception e)
 #pragma warning restore CA1031
 {
     Console.Error.WriteLine($"loaddiff: internal error: {e.GetType().Name}: {e.Message} (please report this with the input that caused it)");
+    if (Environment.GetEnvironmentVariable("LOADDIFF_TRACE") == "1")
+    {
+        Console.Error.WriteLine(e.ToString()); // for developers only: never shown unless asked for
+    }
     return ExitCodes.InputError;
 }

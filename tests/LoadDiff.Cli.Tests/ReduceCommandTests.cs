@@ -68,4 +68,20 @@ public class ReduceCommandTests
         Assert.Contains("Example:", run.Stdout);
         Assert.Contains("--at", run.Stdout);
     }
+
+    [Fact]
+    public void Values_whose_products_overflow_exit_2_with_one_line_and_no_stack_trace()
+    {
+        // Each number is within the accepted 1e100, but the moment of 1e100 N at 1e100 m and the wrench axis pass 1.8e308.
+        using var t = new TempFolder();
+        string f = t.Write("huge.loads.json", """
+            { "cases": { "c": { "loads": [
+              { "id": "w", "kind": "line", "from": [0,0,0], "to": [1e100,0,0], "start": [1e100, 5e-324, 0], "end": [5e-324, 1e100, 0] } ] } } }
+            """);
+        CliRun run = CliProcess.RunIn(t.Path, "reduce", f);
+        Assert.Equal(2, run.ExitCode);
+        Assert.Contains("overflow", Assert.Single(run.StderrLines));
+        Assert.DoesNotContain("   at ", run.Stderr);
+        Assert.Equal("", run.Stdout);
+    }
 }

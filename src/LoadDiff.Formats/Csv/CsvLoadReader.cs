@@ -206,6 +206,10 @@ internal sealed class CsvLoadReader
         {
             body();
         }
+        catch (OverflowException)
+        {
+            throw csv.Fail(Codes.OutOfRange, "values on this line overflow the range of double when reduced (forces × lever arms); use smaller units", null);
+        }
         catch (System.Text.DecoderFallbackException)
         {
             throw csv.InvalidUtf8();

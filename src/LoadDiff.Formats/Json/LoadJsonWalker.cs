@@ -210,7 +210,15 @@ internal sealed class LoadJsonWalker
         void Emit(LoadItem li)
         {
             CountItem(item, path);
-            sink.Item(li);
+            try
+            {
+                sink.Item(li);
+            }
+            catch (OverflowException)
+            {
+                // Accepted magnitudes (≤ 1e100) can still overflow in the products of the reduction (moments of huge loads at huge distances).
+                throw Error(item, path, Codes.OutOfRange, "this load's values overflow the range of double when it is reduced (forces × lever arms); use smaller units");
+            }
         }
         switch (kind)
         {
