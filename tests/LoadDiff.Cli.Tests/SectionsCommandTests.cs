@@ -138,4 +138,21 @@ public class SectionsCommandTests
         Assert.True(Dev("force_deviation") < 1e-9, Dev("force_deviation").ToString(CultureInfo.InvariantCulture));
         Assert.True(Dev("moment_deviation") < 1e-9, Dev("moment_deviation").ToString(CultureInfo.InvariantCulture));
     }
+
+    [Fact]
+    public void Check_report_with_the_section_gate_carries_one_chart_per_case_and_no_url()
+    {
+        using var t = new TempFolder();
+        string report = Path.Combine(t.Path, "wall.html");
+        CliRun run = CliProcess.Run("check", CliProcess.Fixture("tank-wall", "detailed.loads.json"), CliProcess.Fixture("tank-wall", "simplified.loads.json"),
+            "--sections", "z", "--section-tol", "0.05", "--report", report);
+        Assert.True(run.ExitCode == 0, run.ToString());
+        string html = File.ReadAllText(report);
+        Assert.Contains("Section cuts: water", html);
+        // The chart is labelled with its units.
+        Assert.Contains("V (kN)", html);
+        Assert.DoesNotContain("http://", html);
+        Assert.DoesNotContain("https://", html);
+        Assert.DoesNotContain("No section cuts were requested", html, StringComparison.OrdinalIgnoreCase);
+    }
 }

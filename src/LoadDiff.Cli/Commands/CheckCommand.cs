@@ -71,11 +71,11 @@ public static class CheckCommand
             Vector3 point = a.ResolvePoint(choice, out string description);
             CheckResult result = Check(a, b, point, description, tolerance, selected);
             Render(result, parse.GetValue(format)!, output);
+            bool sectionsPass = sectionGate.Run(parse, originalPath, substitutePath, a.Units, selected, parse.GetValue(format)!, output, error, out var profiles);
             if (reportPath is not null)
             {
-                ReportFile.WriteCheck(reportPath, result, a, b, sketchA, sketchB);
+                ReportFile.WriteCheck(reportPath, result, a, b, sketchA, sketchB, profiles is null ? null : SectionGate.Charts(profiles));
             }
-            bool sectionsPass = sectionGate.Run(parse, originalPath, substitutePath, a.Units, selected, parse.GetValue(format)!, output, error);
             return result.Equivalent && sectionsPass ? ExitCodes.Success : ExitCodes.Different;
         });
         return command;

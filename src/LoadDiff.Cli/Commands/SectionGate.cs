@@ -3,6 +3,7 @@ using LoadDiff.Core;
 using LoadDiff.Core.Sections;
 using LoadDiff.Core.Units;
 using LoadDiff.Reports;
+using LoadDiff.Reports.Html;
 using LoadDiff.Reports.Sections;
 
 namespace LoadDiff.Cli.Commands;
@@ -62,8 +63,14 @@ public sealed class SectionGate
     /// <paramref name="error"/> for JSON and JUnit so those stay valid documents. True when it passes or was not asked for.
     /// </summary>
     public bool Run(ParseResult parse, string originalPath, string substitutePath, UnitSystem units,
-        IReadOnlyCollection<string> selected, string format, TextWriter output, TextWriter error)
+        IReadOnlyCollection<string> selected, string format, TextWriter output, TextWriter error) =>
+        Run(parse, originalPath, substitutePath, units, selected, format, output, error, out _);
+
+    /// <summary>As <see cref="Run(ParseResult, string, string, UnitSystem, IReadOnlyCollection{string}, string, TextWriter, TextWriter)"/>, also giving the profiles (null when not asked for) for a report.</summary>
+    public bool Run(ParseResult parse, string originalPath, string substitutePath, UnitSystem units,
+        IReadOnlyCollection<string> selected, string format, TextWriter output, TextWriter error, out SectionsResult? profiles)
     {
+        profiles = null;
         ArgumentNullException.ThrowIfNull(parse);
         ArgumentNullException.ThrowIfNull(output);
         ArgumentNullException.ThrowIfNull(error);
@@ -78,6 +85,7 @@ public sealed class SectionGate
         CollectedFile b = CollectedFile.Read(substitutePath, units, error);
         var axis = SectionAxis.Create(Vector3.Zero, direction.Value);
         SectionsResult result = SectionsCommand.Compute(a, b, axis, null, null, SectionOptions.DefaultStations, selected, error);
+        profiles = result;
         TextWriter w = format is "text" or "markdown" ? output : error;
         string m = units.MomentSymbol, l = units.Length.Symbol;
         w.WriteLine();
@@ -97,5 +105,21 @@ public sealed class SectionGate
         w.WriteLine(pass ? "Section-cut gate: PASS" : "Section-cut gate: FAIL — the substitute changes the internal effects by more than allowed.");
         w.WriteLine(SectionsResult.SectionCaution);
         return pass;
+    }
+
+    /// <summary>One chart per case and combination for the HTML report (inline SVG, no namespace URL needed inside HTML).</summary>
+    public static IReadOnlyList<SectionChart> Charts(SectionsResult profiles)
+    {
+        ArgumentNullException.ThrowIfNull(profiles);
+        var charts = new List<SectionChart>();
+        foreach (SectionsEntry e in profiles.Entries)
+        {
+            using var w = new StringWriter(System.Globalization.CultureInfo.InvariantCulture);
+            SectionsSvgWriter.Write(profiles with { Entries = [e] }, w);
+            string svg = w.ToString().Replace(" xmlns=\"http://www.w3.org/2000/svg\"", "", StringComparison.Ordinal);
+            charts.Add(new SectionChart($"Section cuts: {e.Name}", svg,
+                $"Largest |ΔM| = {NumberText.Readable(e.Comparison.MaxMomentDeviation)} {profiles.Units.MomentSymbol} at s = {NumberText.Readable(e.Comparison.MaxMomentDeviationAt)} {profiles.Units.Length.Symbol}"));
+        }
+        return charts;
     }
 }
