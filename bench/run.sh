@@ -32,10 +32,17 @@ stem=$(basename "$points" .csv); mstem=$(basename "$mesh" .csv)
 printf '{ "cases": { "%s": { "loads": [ { "id": "r", "kind": "force", "at": [512100, 6170025, 40.5], "value": [0, 0, -1] } ] } } }\n' "$stem" > "$out/points-substitute.loads.json"
 printf '{ "cases": { "%s": { "loads": [ { "id": "r", "kind": "force", "at": [0, 0, 12], "value": [0, 0, -1] } ] } } }\n' "$mstem" > "$out/mesh-substitute.loads.json"
 
-echo "publishing loaddiff (Release, ReadyToRun)" >&2
-dotnet publish src/LoadDiff.Cli -c Release -r linux-x64 --self-contained false -p:PublishReadyToRun=true \
-  -o "$out/r2r" -v quiet -nologo >/dev/null
-ld="$out/r2r/loaddiff"
+# Native AOT (needs a C toolchain: gcc here; on a bare Debian machine apt-get install clang zlib1g-dev);
+# ReadyToRun when AOT cannot be built.
+echo "publishing loaddiff (Release, Native AOT)" >&2
+if dotnet publish src/LoadDiff.Cli -c Release -r linux-x64 -p:PublishAot=true -o "$out/aot" -v quiet -nologo >/dev/null 2>&1; then
+  ld="$out/aot/loaddiff"; build="Native AOT"
+else
+  echo "Native AOT publish failed; using ReadyToRun" >&2
+  dotnet publish src/LoadDiff.Cli -c Release -r linux-x64 --self-contained false -p:PublishReadyToRun=true \
+    -o "$out/r2r" -v quiet -nologo >/dev/null
+  ld="$out/r2r/loaddiff"; build="ReadyToRun"
+fi
 
 # run LABEL CMD... : appends "seconds peak_kib" to $out/LABEL.times (wall time from a ns clock,
 # since /usr/bin/time resolves only 10 ms; peak resident memory from /usr/bin/time)
@@ -66,6 +73,7 @@ done
 m() { awk '{print $1}' "$out/$1.times" | median; }
 ratio() { awk -v a="$1" -v b="$2" 'BEGIN { if (b > 0) printf "%.2f", a / b; else print "n/a" }'; }
 {
+  echo "loaddiff build: $build"
   echo "machine: $(nproc) cores, $(free -g | awk '/Mem/ {print $2}') GiB, $(uname -sr); runs: $runs (medians)"
   echo "points: $rows rows, $(du -h "$points" | cut -f1); mesh: $triangles triangles, $(du -h "$mesh" | cut -f1)"
   echo
