@@ -14,13 +14,7 @@ public static class DiffJsonWriter
     public static void Write(DocumentDiff d, Stream output, string toolVersion)
     {
         ArgumentNullException.ThrowIfNull(d);
-        using var w = new Utf8JsonWriter(output, new JsonWriterOptions { Indented = true, Encoder = System.Text.Encodings.Web.JavaScriptEncoder.UnsafeRelaxedJsonEscaping });
-        w.WriteStartObject();
-        w.WriteNumber("schema_version", SchemaVersion);
-        w.WriteStartObject("tool");
-        w.WriteString("name", "loaddiff");
-        w.WriteString("version", toolVersion);
-        w.WriteEndObject();
+        using Utf8JsonWriter w = JsonOut.Begin(output, SchemaVersion, toolVersion);
         w.WriteString("old_file", d.OldName);
         w.WriteString("new_file", d.NewName);
         w.WriteBoolean("different", d.HasDifferences);

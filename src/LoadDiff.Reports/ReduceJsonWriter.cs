@@ -18,13 +18,7 @@ public static class ReduceJsonWriter
     public static void Write(ReduceResult result, Stream output, string toolVersion)
     {
         ArgumentNullException.ThrowIfNull(result);
-        using var w = new Utf8JsonWriter(output, new JsonWriterOptions { Indented = true, Encoder = System.Text.Encodings.Web.JavaScriptEncoder.UnsafeRelaxedJsonEscaping });
-        w.WriteStartObject();
-        w.WriteNumber("schema_version", SchemaVersion);
-        w.WriteStartObject("tool");
-        w.WriteString("name", "loaddiff");
-        w.WriteString("version", toolVersion);
-        w.WriteEndObject();
+        using Utf8JsonWriter w = JsonOut.Begin(output, SchemaVersion, toolVersion);
         w.WriteString("source", result.Source);
         if (result.Title is { } t)
         {
@@ -105,6 +99,26 @@ public static class ReduceJsonWriter
 /// <summary>Small helpers shared by the JSON writers.</summary>
 public static class JsonOut
 {
+    /// <summary>
+    /// A writer with the documented conventions (indented, UTF-8 text unescaped, shortest round-trip numbers),
+    /// already inside the top-level object with <c>schema_version</c> and <c>tool</c> written.
+    /// </summary>
+    public static Utf8JsonWriter Begin(Stream output, int schemaVersion, string toolVersion)
+    {
+        var w = new Utf8JsonWriter(output, new JsonWriterOptions
+        {
+            Indented = true,
+            Encoder = System.Text.Encodings.Web.JavaScriptEncoder.UnsafeRelaxedJsonEscaping,
+        });
+        w.WriteStartObject();
+        w.WriteNumber("schema_version", schemaVersion);
+        w.WriteStartObject("tool");
+        w.WriteString("name", "loaddiff");
+        w.WriteString("version", toolVersion);
+        w.WriteEndObject();
+        return w;
+    }
+
     /// <summary>Writes <c>"name": [x, y, z]</c>.</summary>
     public static void Vector(Utf8JsonWriter w, string name, Vector3 v)
     {

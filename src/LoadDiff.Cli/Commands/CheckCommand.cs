@@ -129,11 +129,7 @@ public static class CheckCommand
         switch (format)
         {
             case "json":
-                using (var ms = new MemoryStream())
-                {
-                    CheckJsonWriter.Write(result, ms, AppInfo.Version);
-                    output.Write(System.Text.Encoding.UTF8.GetString(ms.ToArray()));
-                }
+                JsonToText.Write(output, ms => CheckJsonWriter.Write(result, ms, AppInfo.Version));
                 break;
             case "markdown":
                 CheckMarkdownRenderer.Write(result, output);

@@ -151,12 +151,8 @@ public static class DiffCommand
         switch (format)
         {
             case "json":
-                using (var ms = new MemoryStream())
-                {
-                    DiffJsonWriter.Write(diff, ms, AppInfo.Version);
-                    output.Write(Encoding.UTF8.GetString(ms.ToArray()));
-                    output.WriteLine();
-                }
+                JsonToText.Write(output, ms => DiffJsonWriter.Write(diff, ms, AppInfo.Version));
+                output.WriteLine();
                 break;
             case "markdown":
                 DiffMarkdownRenderer.Write(diff, output);

@@ -51,11 +51,7 @@ public static class ReduceCommand
             switch (parse.GetValue(format))
             {
                 case "json":
-                    using (var ms = new MemoryStream())
-                    {
-                        ReduceJsonWriter.Write(result, ms, AppInfo.Version);
-                        output.Write(System.Text.Encoding.UTF8.GetString(ms.ToArray()));
-                    }
+                    JsonToText.Write(output, ms => ReduceJsonWriter.Write(result, ms, AppInfo.Version));
                     break;
                 case "markdown":
                     ReduceMarkdownRenderer.Write(result, output);

@@ -55,11 +55,7 @@ public static class SectionsCommand
             switch (parse.GetValue(format))
             {
                 case "json":
-                    using (var ms = new MemoryStream())
-                    {
-                        SectionsJsonWriter.Write(result, ms, AppInfo.Version);
-                        output.Write(System.Text.Encoding.UTF8.GetString(ms.ToArray()));
-                    }
+                    JsonToText.Write(output, ms => SectionsJsonWriter.Write(result, ms, AppInfo.Version));
                     break;
                 case "markdown":
                     SectionsMarkdownRenderer.Write(result, output);

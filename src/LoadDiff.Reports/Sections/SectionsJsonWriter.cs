@@ -19,17 +19,7 @@ public static class SectionsJsonWriter
     public static void Write(SectionsResult result, Stream output, string toolVersion)
     {
         ArgumentNullException.ThrowIfNull(result);
-        using var w = new Utf8JsonWriter(output, new JsonWriterOptions
-        {
-            Indented = true,
-            Encoder = System.Text.Encodings.Web.JavaScriptEncoder.UnsafeRelaxedJsonEscaping,
-        });
-        w.WriteStartObject();
-        w.WriteNumber("schema_version", SchemaVersion);
-        w.WriteStartObject("tool");
-        w.WriteString("name", "loaddiff");
-        w.WriteString("version", toolVersion);
-        w.WriteEndObject();
+        using Utf8JsonWriter w = JsonOut.Begin(output, SchemaVersion, toolVersion);
         w.WriteString("original_file", result.OriginalPath);
         w.WriteString("substitute_file", result.SubstitutePath);
         JsonOut.Units(w, result.Units);
