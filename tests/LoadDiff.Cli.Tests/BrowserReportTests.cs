@@ -56,7 +56,34 @@ public partial class BrowserReportTests
         string html = File.ReadAllText(report);
         int expectedRows = args[0] == "check" ? ReportTests.CaseCount(args) : Regex.Count(html, "<tr data-name=");
         Assert.True(expectedRows > 0);
+        Inspect(t, name, report, expectedRows);
+    }
 
+    [BrowserFact]
+    public void Diff_html_renders_in_chromium()
+    {
+        using var t = new TempFolder();
+        CliRun run = CliProcess.Run("diff", "fixtures/footbridge/detailed.loads.json", "fixtures/footbridge/detailed-rev-b.loads.json", "--format", "html");
+        Assert.True(run.ExitCode == 1, run.ToString());
+        string page = t.Write("diff.html", run.Stdout);
+        Inspect(t, "diff", page, expectedRows: null);
+    }
+
+    [BrowserFact]
+    public void Check_report_with_section_charts_renders_in_chromium()
+    {
+        using var t = new TempFolder();
+        string report = Path.Combine(t.Path, "sections.html");
+        CliRun run = CliProcess.Run("check", "fixtures/tank-wall/detailed.loads.json", "fixtures/tank-wall/simplified-reversed.loads.json",
+            "--sections", "z", "--section-tol", "0.05", "--report", report);
+        Assert.True(run.ExitCode == 1, run.ToString());
+        Inspect(t, "sections", report, ReportTests.CaseCount(["check", "fixtures/tank-wall/detailed.loads.json", "fixtures/tank-wall/simplified-reversed.loads.json"]));
+    }
+
+    // Opens a page in the browser with the probe, checks errors, fetches, drawings and rows, and takes a screenshot.
+    private static void Inspect(TempFolder t, string name, string report, int? expectedRows)
+    {
+        string html = File.ReadAllText(report);
         string probe = Path.Combine(t.Path, name + ".probe.html");
         File.WriteAllText(probe, html.Replace("<head>", "<head>\n" + ErrorProbe, StringComparison.Ordinal)
             .Replace("</body>", Measure + "\n</body>", StringComparison.Ordinal));
@@ -67,7 +94,10 @@ public partial class BrowserReportTests
         JsonElement root = doc.RootElement;
         Assert.Equal(0, root.GetProperty("errors").GetArrayLength());
         Assert.Equal(0, root.GetProperty("resources").GetArrayLength());
-        Assert.Equal(expectedRows, root.GetProperty("rows").GetInt32());
+        if (expectedRows is { } rows)
+        {
+            Assert.Equal(rows, root.GetProperty("rows").GetInt32());
+        }
         var svgs = root.GetProperty("svgs").EnumerateArray().Select(s => s.EnumerateArray().Select(v => v.GetDouble()).ToArray()).ToList();
         Assert.Equal(Regex.Count(html, "<svg "), svgs.Count);
         Assert.All(svgs, s =>
