@@ -49,6 +49,49 @@ public partial class BadInputCorpusTests
         Assert.Equal(before, HashCorpus());
     }
 
+    public static TheoryData<string, string> RunnableFilesByCommand()
+    {
+        var data = new TheoryData<string, string>();
+        foreach (string name in RunnableNames())
+        {
+            // diff and fmt read load descriptions only; a CSV given directly is refused before it is read
+            string[] commands = name.EndsWith(".csv", StringComparison.Ordinal)
+                ? ["check-original", "check-substitute"]
+                : ["check-original", "check-substitute", "diff-old", "diff-new", "fmt"];
+            foreach (string c in commands)
+            {
+                data.Add(name, c);
+            }
+        }
+        return data;
+    }
+
+    [Theory]
+    [MemberData(nameof(RunnableFilesByCommand))]
+    public void A_bad_file_fails_the_same_way_in_every_command_and_position(string name, string command)
+    {
+        Expectation expected = Manifest()[name];
+        Dictionary<string, string> before = HashCorpus();
+        string bad = Path.Combine("fixtures", "bad", name);
+        string good = Path.Combine("fixtures", "footbridge", "detailed.loads.json");
+        string[] args = command switch
+        {
+            "check-original" => ["check", bad, good],
+            "check-substitute" => ["check", good, bad],
+            "diff-old" => ["diff", bad, good],
+            "diff-new" => ["diff", good, bad],
+            _ => ["fmt", bad],
+        };
+        CliRun run = CliProcess.Run(args);
+
+        Assert.True(run.ExitCode == 2, run.ToString());
+        Assert.Equal("", run.Stdout);
+        Assert.DoesNotContain("   at ", run.Stderr);
+        string line = Assert.Single(run.StderrLines);
+        Assert.StartsWith(expected.Prefix(Path.Combine("fixtures", "bad"), bad, "error"), line);
+        Assert.Equal(before, HashCorpus());
+    }
+
     [Fact]
     public void A_file_with_an_unknown_field_exits_0_with_one_warning_line()
     {
