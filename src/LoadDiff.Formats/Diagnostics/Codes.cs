@@ -29,6 +29,7 @@ public static class Codes
     public const string TooFewVertices = "LD039";
     public const string UnknownCase = "LD040";
     public const string NoCases = "LD041";
+    public const string SelfIntersectingPolygon = "LD042";
     public const string OutsideFolder = "LD050";
     public const string ReferencedFileMissing = "LD051";
     public const string CsvMissingColumn = "LD060";

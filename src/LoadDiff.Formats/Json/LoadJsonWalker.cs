@@ -277,6 +277,11 @@ internal sealed class LoadJsonWalker
                     throw Error(polyNode, path + ".polygon", Codes.NonPlanarPolygon,
                         $"the polygon is not planar: a vertex lies {Text(geo.OutOfPlane)} off its mean plane (limit 1e-9 of its size)");
                 }
+                if (!PolygonGeometry.IsSimple(poly, geo.AreaVector))
+                {
+                    throw Error(polyNode, path + ".polygon", Codes.SelfIntersectingPolygon,
+                        "the polygon's edges cross or touch each other; give its vertices in order around its boundary");
+                }
                 double p = Number(Required(item, "pressure", path), path + ".pressure") * _units.Pressure;
                 Vector3? dir = Direction(item["direction"], path + ".direction");
                 Vector3 grad = item["gradient"] is { } gn ? Vec(gn, path + ".gradient") * _units.PressureGradient : Vector3.Zero;
