@@ -110,7 +110,7 @@ public static class LoadFileReader
         {
             long offset = e.ReaderLine is { } rl ? lines.OffsetOf(rl, e.ReaderBytePosition) : e.Offset;
             var (l, c) = lines.Locate(offset);
-            throw e.TooDeep ? Fail(Codes.TooDeep, $"JSON nesting deeper than {options.MaxDepth} levels", file, l, c)
+            throw e.TooDeep ? Fail(Codes.TooDeep, $"JSON nesting deeper than {options.MaxDepth} levels (raise the limit with --max-depth)", file, l, c)
                 : e.InvalidText ? Fail(Codes.InvalidUtf8, e.Message, file, l, c)
                 : Fail(Codes.MalformedJson, "malformed JSON: " + e.Message, file, l, c);
         }
@@ -174,7 +174,7 @@ public static class LoadFileReader
             {
                 c = ColumnOf(path, skip, rl: l - 1, e.ReaderBytePosition);
             }
-            throw e.TooDeep ? Fail(Codes.TooDeep, $"JSON nesting deeper than {options.MaxDepth} levels", path, l, c)
+            throw e.TooDeep ? Fail(Codes.TooDeep, $"JSON nesting deeper than {options.MaxDepth} levels (raise the limit with --max-depth)", path, l, c)
                 : e.InvalidText ? Fail(Codes.InvalidUtf8, e.Message, path, l, c)
                 : Fail(Codes.MalformedJson, "malformed JSON: " + e.Message, path, l, c);
         }
@@ -225,7 +225,7 @@ public static class LoadFileReader
         var info = new FileInfo(path);
         if (info.Length > options.MaxJsonBytes)
         {
-            throw Fail(Codes.FileTooLarge, $"file is {info.Length} bytes, more than the JSON limit of {options.MaxJsonBytes} (put large data in CSV files)", path);
+            throw Fail(Codes.FileTooLarge, $"file is {info.Length} bytes, more than the JSON limit of {options.MaxJsonBytes} (put large data in CSV files, or raise --max-file-size)", path);
         }
         try
         {

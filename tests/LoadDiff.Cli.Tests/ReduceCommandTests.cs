@@ -84,4 +84,50 @@ public class ReduceCommandTests
         Assert.DoesNotContain("   at ", run.Stderr);
         Assert.Equal("", run.Stdout);
     }
+
+    [Theory]
+    [InlineData("--max-file-size", "100", "1000000", "LD002")]
+    [InlineData("--max-depth", "2", "64", "LD005")]
+    [InlineData("--max-items", "3", "100", "LD071")]
+    public void Limits_are_enforced_with_their_code_and_can_be_raised(string option, string low, string high, string code)
+    {
+        string demo = CliProcess.Fixture("footbridge", "detailed.loads.json");
+        CliRun refused = CliProcess.Run("reduce", demo, option, low);
+        Assert.Equal(2, refused.ExitCode);
+        string line = Assert.Single(refused.StderrLines);
+        Assert.Contains(code, line);
+        Assert.Contains(option, line);
+        Assert.Equal(0, CliProcess.Run("reduce", demo, option, high).ExitCode);
+    }
+
+    [Fact]
+    public void A_long_csv_line_is_refused_with_LD072_unless_the_limit_is_raised()
+    {
+        using var t = new TempFolder();
+        string csv = t.Write("long.csv", "id,x,y,z,fx,fy,fz\n" + new string('p', 200) + ",0,0,0,0,0,-1\n");
+        CliRun refused = CliProcess.Run("reduce", csv, "--max-line-length", "64");
+        Assert.Equal(2, refused.ExitCode);
+        Assert.Contains("LD072", Assert.Single(refused.StderrLines));
+        Assert.Equal(0, CliProcess.Run("reduce", csv, "--max-line-length", "1000").ExitCode);
+    }
+
+    [Fact]
+    public void Json_output_is_bit_identical_for_one_thread_and_two()
+    {
+        // Several 4 MiB blocks, so the parallel path really splits the file.
+        using var t = new TempFolder();
+        var rnd = new Random(17);
+        var sb = new System.Text.StringBuilder("id,x,y,z,fx,fy,fz\n");
+        for (int i = 0; i < 150_000; i++)
+        {
+            sb.Append(System.Globalization.CultureInfo.InvariantCulture,
+                $"n{i},{512000 + (rnd.NextDouble() * 200):R},{6170000 + (rnd.NextDouble() * 50):R},{rnd.NextDouble():R},{rnd.NextDouble() - 0.5:R},{rnd.NextDouble() - 0.5:R},{-1 - (rnd.NextDouble() * 20):R}\n");
+        }
+        string csv = t.Write("deck.csv", sb.ToString());
+        Assert.True(new FileInfo(csv).Length > 3 * (4 << 20));
+        CliRun one = CliProcess.Run("reduce", csv, "--format", "json", "--threads", "1");
+        CliRun two = CliProcess.Run("reduce", csv, "--format", "json", "--threads", "2");
+        Assert.Equal(0, one.ExitCode);
+        Assert.Equal(one.Stdout, two.Stdout);
+    }
 }

@@ -108,7 +108,7 @@ internal sealed class BlockCsvReducer
                     int lastNewline = data.AsSpan(0, length).LastIndexOf((byte)'\n');
                     if (lastNewline < 0)
                     {
-                        throw Fail(Codes.LineTooLong, $"a line is longer than the limit of {_options.MaxLineLength} characters", nextLine, 1);
+                        throw Fail(Codes.LineTooLong, $"a line is longer than the limit of {_options.MaxLineLength} characters (raise it with --max-line-length)", nextLine, 1);
                     }
                     end = lastNewline + 1;
                 }
@@ -293,7 +293,7 @@ internal sealed class BlockCsvReducer
                 pos = next;
                 if (row.Length > _options.MaxLineLength)
                 {
-                    return Error(Codes.LineTooLong, $"line is longer than the limit of {_options.MaxLineLength} characters", line, 1);
+                    return Error(Codes.LineTooLong, $"line is longer than the limit of {_options.MaxLineLength} characters (raise it with --max-line-length)", line, 1);
                 }
                 if (row.Trim((ReadOnlySpan<byte>)[(byte)' ', (byte)'\t']).IsEmpty)
                 {

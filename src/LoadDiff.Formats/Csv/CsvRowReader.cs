@@ -215,7 +215,7 @@ internal sealed class CsvRowReader : IDisposable
             if (line.Length > _maxLine)
             {
                 throw new InputError(new Diagnostic(Codes.LineTooLong, Severity.Error,
-                    $"line is {line.Length} characters long, more than the limit of {_maxLine}", new SourceLocation(_file, Line, 1)));
+                    $"line is {line.Length} characters long, more than the limit of {_maxLine} (raise it with --max-line-length)", new SourceLocation(_file, Line, 1)));
             }
             if (Line == 1 && line.Length > 0 && line[0] == '\uFEFF')
             {
