@@ -295,7 +295,7 @@ internal sealed class BlockCsvReducer
                 {
                     return Error(Codes.LineTooLong, $"line is longer than the limit of {_options.MaxLineLength} characters (raise it with --max-line-length)", line, 1);
                 }
-                if (row.Trim((ReadOnlySpan<byte>)[(byte)' ', (byte)'\t']).IsEmpty)
+                if (row.IsEmpty || (row[0] <= (byte)' ' && Blank(row)))
                 {
                     continue;
                 }
@@ -311,7 +311,7 @@ internal sealed class BlockCsvReducer
                 for (int k = 0; k < layout.Columns.Length; k++)
                 {
                     int c = layout.Columns[k];
-                    ReadOnlySpan<byte> f = row[starts[c]..ends[c]].Trim((ReadOnlySpan<byte>)[(byte)' ', (byte)'\t']);
+                    ReadOnlySpan<byte> f = TrimSpaces(row[starts[c]..ends[c]]);
                     double x;
                     int used = f.Length;
                     if (!DecimalFastPath.TryParse(f, out x)
@@ -374,6 +374,33 @@ internal sealed class BlockCsvReducer
             return Error(Codes.OutOfRange, "values on this line overflow when multiplied (unit conversion or moment)", line, 1);
         }
         return new BlockResult(acc, largest, items, null);
+    }
+
+    private static bool Blank(ReadOnlySpan<byte> row)
+    {
+        foreach (byte b in row)
+        {
+            if (b != (byte)' ' && b != (byte)'\t')
+            {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    // Spaces and tabs around a field are allowed; the common case has none, so look at the ends only.
+    private static ReadOnlySpan<byte> TrimSpaces(ReadOnlySpan<byte> f)
+    {
+        int a = 0, b = f.Length;
+        while (a < b && (f[a] == (byte)' ' || f[a] == (byte)'\t'))
+        {
+            a++;
+        }
+        while (b > a && (f[b - 1] == (byte)' ' || f[b - 1] == (byte)'\t'))
+        {
+            b--;
+        }
+        return f[a..b];
     }
 
     private static int FirstInvalid(ReadOnlySpan<byte> bytes)
