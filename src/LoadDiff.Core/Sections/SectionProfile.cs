@@ -128,6 +128,15 @@ public static class SectionProfile
             }
         }
         couple = couples.Value;
+        // Geometry within rounding of a cut (1e-12 of its reach along the axis) counts as on the cut, so a load that
+        // lies in the cut plane is on the same side whether it comes whole or in pieces; clipping itself stays at s.
+        // (the rounding of a station grows with the point's distance from the axis origin, not with the station)
+        double reach = 0;
+        foreach (var x in located)
+        {
+            x.Item.VisitGeometry(p => reach = Math.Max(reach, (p - axis.Origin).Length));
+        }
+        double onCut = 1e-12 * reach;
         var byMax = located.OrderBy(x => x.Max).ToArray();
         var byMin = located.OrderBy(x => x.Min).ToArray();
         var whole = new ReductionAccumulator();
@@ -138,7 +147,8 @@ public static class SectionProfile
         {
             double s = stations[i];
             Vector3 cut = axis.PointAt(s);
-            while (nextWhole < byMax.Length && byMax[nextWhole].Max <= s)
+            double sOn = s + onCut;
+            while (nextWhole < byMax.Length && byMax[nextWhole].Max <= sOn)
             {
                 whole.Add(byMax[nextWhole++].Item);
             }
@@ -146,7 +156,7 @@ public static class SectionProfile
             {
                 cutThrough.Add(byMin[nextStarted++]);
             }
-            cutThrough.RemoveAll(x => x.Max <= s);
+            cutThrough.RemoveAll(x => x.Max <= sOn);
             var part = new ReductionAccumulator();
             foreach (var x in cutThrough)
             {

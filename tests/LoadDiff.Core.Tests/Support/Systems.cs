@@ -6,7 +6,12 @@ namespace LoadDiff.Core.Tests.Support;
 /// <summary>Random load systems of every item kind, and exact rigid motions and scalings of them.</summary>
 public static class Systems
 {
-    public static readonly Gen<Vector3> Position = Vec(-10, 10);
+    // Positions are multiples of 2⁻²⁴ (and the fixed offsets below are dyadic), so shifting a system by
+    // whole metres up to 10⁶ is exact: the shifted and unshifted systems are the same geometry.
+    public static readonly Gen<Vector3> Position = Vec(-10, 10).Select(v =>
+        Vector3.Create(Dyadic(v.X), Dyadic(v.Y), Dyadic(v.Z)));
+
+    private static double Dyadic(double x) => Math.Round(x * (1 << 24)) / (1 << 24);
 
     public static readonly Gen<Vector3> Load = Vec(-100, 100);
 
@@ -22,7 +27,7 @@ public static class Systems
             (LoadItem)new AreaLoad("a", [o, o + Vector3.Create(2, 0, 0.5), o + Vector3.Create(2.5, 3, 1), o + Vector3.Create(-0.5, 2, 0.5)],
                 p, normal ? null : Vector3.Create(0.3, -0.2, 1), g, o + Vector3.Create(1, 1, 0))),
         4 => Gen.Select(Position, Gen.Double[-50, 50], Gen.Double[-50, 50], Gen.Double[-50, 50], (o, pa, pb, pc) =>
-            (LoadItem)new MeshTriangle("t", o, o + Vector3.Create(1.5, 0.2, 0), o + Vector3.Create(0.1, 2, 0.7), pa, pb, pc, null)),
+            (LoadItem)new MeshTriangle("t", o, o + Vector3.Create(1.5, 0.25, 0), o + Vector3.Create(0.125, 2, 0.75), pa, pb, pc, null)),
         _ => Gen.Select(Position, Gen.Double[0.1, 10], (at, m) => (LoadItem)new PointMass("m", at, m, Vector3.Create(0, 0, -9.80665))),
     });
 
