@@ -6,7 +6,7 @@ using static LoadDiff.Core.Tests.Support.Reduce;
 
 namespace LoadDiff.Core.Tests;
 
-public class LineLoadTests
+public partial class LineLoadTests
 {
     [Fact]
     public void ContributionAbout_trapezoid220To890Over6m_resultant3330AtTrapezoidCentroid()

@@ -61,6 +61,14 @@ public sealed record LineLoad(string Id, Vector3 From, Vector3 To, Vector3 Start
         {
             return (na, na / 2);
         }
+        // Both integrals are homogeneous of degree one in (a, b): work at unit scale, so that squares and cross
+        // products of very small or very large intensities neither underflow nor overflow.
+        double scale = Math.Max(na, Math.Max(nb, ne));
+        if (scale is < 1e-60 or > 1e60)
+        {
+            (double s0, double s1) = NormIntegrals(a / scale, b / scale);
+            return (s0 * scale, s1 * scale);
+        }
         Vector3 cross = Vector3.Cross(a, b);
         if (cross.Length <= 1e-14 * na * nb || na == 0 || ne == 0)
         {
