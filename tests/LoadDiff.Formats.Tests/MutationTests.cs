@@ -87,4 +87,16 @@ public class MutationTests
             }
         }, iter: 300);
     }
+
+    [Fact]
+    public void A_key_with_a_line_break_is_quoted_on_one_line()
+    {
+        // found by the mutation property above: a quoted key carried its line break into the message
+        byte[] json = "{ \"cases\": { \"c\": { \"loads\": [] } }, \"ti\\ntle\": 1 }"u8.ToArray();
+        ReadResult r = LoadFileReader.ReadJson(json, "k.loads.json", Path.GetTempPath(), new ReductionSink());
+        Diagnostic w = Assert.Single(r.Diagnostics);
+        Assert.Equal(Codes.UnknownField, w.Code);
+        Assert.DoesNotContain('\n', w.ToString());
+        Assert.Contains("ti\\ntle", w.ToString());
+    }
 }

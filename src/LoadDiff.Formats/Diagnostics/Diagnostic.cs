@@ -11,7 +11,29 @@ public sealed record Diagnostic(string Code, Severity Severity, string Message, 
     public override string ToString()
     {
         string kind = Severity == Severity.Error ? "error" : "warning";
-        string path = Location.JsonPath is { } p ? $" (at {p})" : "";
-        return $"{Location}: {kind} {Code}: {Message}{path}";
+        string path = Location.JsonPath is { } p ? $" (at {OneLine(p)})" : "";
+        return $"{OneLine(Location.ToString())}: {kind} {Code}: {OneLine(Message)}{path}";
+    }
+
+    // Keys and values quoted from a file may hold control characters; a diagnostic stays one line.
+    private static string OneLine(string s)
+    {
+        if (!s.Any(char.IsControl))
+        {
+            return s;
+        }
+        var b = new System.Text.StringBuilder(s.Length + 8);
+        foreach (char c in s)
+        {
+            _ = c switch
+            {
+                '\n' => b.Append("\\n"),
+                '\r' => b.Append("\\r"),
+                '\t' => b.Append("\\t"),
+                _ when char.IsControl(c) => b.Append("\\u").Append(((int)c).ToString("x4", System.Globalization.CultureInfo.InvariantCulture)),
+                _ => b.Append(c),
+            };
+        }
+        return b.ToString();
     }
 }
