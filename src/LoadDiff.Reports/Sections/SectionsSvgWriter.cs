@@ -12,7 +12,7 @@ namespace LoadDiff.Reports.Sections;
 /// </summary>
 public static class SectionsSvgWriter
 {
-    private const int Width = 880, PanelHeight = 240, Left = 90, Right = 170, Top = 46, Gap = 70;
+    private const int Width = 880, PanelHeight = 240, Left = 90, Right = 170, Top = 66, Gap = 70;
     private static readonly string[] Colours = ["#5b3a8c", "#c2452d", "#1d6f8a"];
 
     /// <summary>Writes the chart.</summary>
