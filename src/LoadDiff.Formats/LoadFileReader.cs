@@ -104,7 +104,7 @@ public static class LoadFileReader
         JsonNode root;
         try
         {
-            root = JsonTreeParser.Parse(span, options.MaxDepth);
+            root = JsonTreeParser.Parse(text, options.MaxDepth);
         }
         catch (JsonSyntaxError e)
         {

@@ -3,103 +3,14 @@ using System.Text.Json;
 namespace LoadDiff.Formats.Json;
 
 /// <summary>
-/// Parses UTF-8 JSON (comments and trailing commas allowed) into a <see cref="JsonNode"/> tree with offsets,
-/// rejecting duplicate keys. Syntax errors surface as <see cref="JsonSyntaxError"/> with the reader's position.
+/// Parses UTF-8 JSON held in memory (comments and trailing commas allowed) into a <see cref="JsonNode"/> tree with
+/// offsets, rejecting duplicate keys; the same token reader and tree builder as the streamed path, keeping every item.
+/// Syntax errors surface as <see cref="JsonSyntaxError"/> with the reader's position.
 /// </summary>
 internal static class JsonTreeParser
 {
-    public static JsonNode Parse(ReadOnlySpan<byte> utf8, int maxDepth)
-    {
-        var reader = new Utf8JsonReader(utf8, new JsonReaderOptions
-        {
-            CommentHandling = JsonCommentHandling.Skip,
-            AllowTrailingCommas = true,
-            MaxDepth = maxDepth,
-        });
-        try
-        {
-            if (!reader.Read())
-            {
-                throw new JsonSyntaxError("the file holds no JSON value", reader.TokenStartIndex);
-            }
-            JsonNode root = ReadValue(ref reader);
-            if (reader.Read())
-            {
-                throw new JsonSyntaxError("unexpected content after the end of the JSON document", reader.TokenStartIndex);
-            }
-            return root;
-        }
-        catch (JsonException e)
-        {
-            throw JsonSyntaxError.From(e);
-        }
-    }
-
-    // A \u escape of a lone surrogate is valid JSON grammar but not Unicode text; report it where it is.
-    private static string Text(ref Utf8JsonReader reader, long start)
-    {
-        try
-        {
-            return reader.GetString()!;
-        }
-        catch (InvalidOperationException)
-        {
-            throw new JsonSyntaxError("a \\u escape in this string encodes a lone UTF-16 surrogate, which is not Unicode text", start)
-            {
-                InvalidText = true,
-            };
-        }
-    }
-
-    private static JsonNode ReadValue(ref Utf8JsonReader reader)
-    {
-        long start = reader.TokenStartIndex;
-        switch (reader.TokenType)
-        {
-            case JsonTokenType.StartObject:
-            {
-                var members = new List<JsonMember>();
-                var seen = new HashSet<string>(StringComparer.Ordinal);
-                while (reader.Read() && reader.TokenType != JsonTokenType.EndObject)
-                {
-                    long keyOffset = reader.TokenStartIndex;
-                    string key = Text(ref reader, keyOffset);
-                    if (!seen.Add(key))
-                    {
-                        throw new JsonDuplicateKey(key, keyOffset);
-                    }
-                    reader.Read();
-                    members.Add(new JsonMember(key, keyOffset, ReadValue(ref reader)));
-                }
-                return JsonNode.Object(start, members);
-            }
-            case JsonTokenType.StartArray:
-            {
-                var elements = new List<JsonNode>();
-                while (reader.Read() && reader.TokenType != JsonTokenType.EndArray)
-                {
-                    elements.Add(ReadValue(ref reader));
-                }
-                return JsonNode.Array(start, elements);
-            }
-            case JsonTokenType.String:
-                return JsonNode.String(start, Text(ref reader, start));
-            case JsonTokenType.Number:
-            {
-                string raw = System.Text.Encoding.UTF8.GetString(reader.ValueSpan);
-                reader.TryGetDouble(out double value);
-                return JsonNode.NumberNode(start, value, raw);
-            }
-            case JsonTokenType.True:
-                return JsonNode.Literal(JsonKind.True, start);
-            case JsonTokenType.False:
-                return JsonNode.Literal(JsonKind.False, start);
-            case JsonTokenType.Null:
-                return JsonNode.Literal(JsonKind.Null, start);
-            default:
-                throw new JsonSyntaxError($"unexpected token {reader.TokenType}", start);
-        }
-    }
+    public static JsonNode Parse(byte[] utf8, int maxDepth) =>
+        StreamingJsonReader.Tree(() => new JsonTokenPump(new MemoryStream(utf8, writable: false), maxDepth, 0), streamLoads: false);
 }
 
 /// <summary>A JSON syntax error at a byte offset, or at a reader line/position.</summary>

@@ -11,14 +11,18 @@ namespace LoadDiff.Formats.Json;
 internal static class StreamingJsonReader
 {
     /// <summary>The tree without load items; their arrays are <see cref="JsonNode.Streamed"/> placeholders.</summary>
-    public static JsonNode Skeleton(Func<JsonTokenPump> open)
+    public static JsonNode Skeleton(Func<JsonTokenPump> open) => Tree(open, streamLoads: true);
+
+    /// <summary>The whole tree; with <paramref name="streamLoads"/> the cases' <c>loads</c> arrays are left as placeholders.</summary>
+    public static JsonNode Tree(Func<JsonTokenPump> open, bool streamLoads)
     {
         using JsonTokenPump pump = open();
         if (!pump.Read())
         {
             throw new JsonSyntaxError("the file holds no JSON value", 0);
         }
-        JsonNode root = Value(pump, 0);
+        // depth 9 marks "not on the way to a loads array", so nothing is streamed
+        JsonNode root = Value(pump, streamLoads ? 0 : 9);
         if (pump.Read())
         {
             throw new JsonSyntaxError("unexpected content after the end of the JSON document", pump.Offset);
