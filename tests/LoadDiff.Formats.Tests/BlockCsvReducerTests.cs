@@ -57,6 +57,30 @@ public class BlockCsvReducerTests
     }
 
     [Fact]
+    public void Rows_the_one_pass_scanner_declines_are_read_the_general_way()
+    {
+        // Spaces around numbers, 16 significant digits, exponents and a trailing id column:
+        // each row's force is known exactly here, so the sums are exact arithmetic.
+        using var t = new TempFolder();
+        string path = t.Write("mixed.csv",
+            "x,y,z,fx,fy,fz,id\n"
+            + "0,0,0,0,0,-1,a\n"
+            + " 1 , 0 ,0, 0,0, -2 ,b\n"
+            + "2,0,0,0,0,-1.000000000000000,c\n"
+            + "3,0,0,0,0,-4e0,d\n"
+            + "4,0,0,0,0,-5e-1,e\n"
+            + "5,0,0,0,0,-1E+00,f\n");
+        var sink = new ReductionSink();
+        ReadResult r = LoadFileReader.Read(path, sink);
+        Assert.True(r.Succeeded, r.Error?.ToString());
+        LoadReduction red = sink.Cases["mixed"].ResultAt(Vector3.Zero);
+        Assert.Equal(6, red.ItemCount);
+        Assert.Equal(-(1 + 2 + 1 + 4 + 0.5 + 1), red.Force.Z);
+        // M_y = −Σ x F_z = −(0·(−1) + 1·(−2) + 2·(−1) + 3·(−4) + 4·(−0.5) + 5·(−1)) = 23
+        Assert.Equal(23, red.Moment.Y);
+    }
+
+    [Fact]
     public void Result_is_bit_identical_for_one_and_for_several_threads()
     {
         using var t = new TempFolder();

@@ -276,6 +276,15 @@ internal sealed class BlockCsvReducer
         }
         double fl = _units.Length, ff = _units.Force, fm = _units.Moment, fp = _units.Pressure;
         bool triangles = layout.Name == CsvLayouts.TriangleRows;
+        // Blocks without quotes take a one-pass scanner; any line it cannot read is read again by the general path,
+        // which also words every error.
+        bool plain = data.AsSpan(0, length).IndexOf((byte)'"') < 0;
+        int[] valueOfField = new int[layout.FieldCount];
+        Array.Fill(valueOfField, -1);
+        for (int k = 0; k < layout.Columns.Length; k++)
+        {
+            valueOfField[layout.Columns[k]] = k;
+        }
         try
         {
             while (pos < length)
@@ -299,8 +308,10 @@ internal sealed class BlockCsvReducer
                 {
                     continue;
                 }
-                int fields = Split(row, starts, ends, out string? splitError);
-                if (splitError is not null)
+                bool scanned = plain && ScanRow(row, valueOfField, v);
+                string? splitError = null;
+                int fields = scanned ? layout.FieldCount : Split(row, starts, ends, out splitError);
+                if (!scanned && splitError is not null)
                 {
                     return Error(Codes.CsvRaggedRow, splitError, line, 1);
                 }
@@ -308,7 +319,7 @@ internal sealed class BlockCsvReducer
                 {
                     return Error(Codes.CsvRaggedRow, $"row has {fields} fields, the header has {layout.FieldCount}", line, 1);
                 }
-                for (int k = 0; k < layout.Columns.Length; k++)
+                for (int k = 0; !scanned && k < layout.Columns.Length; k++)
                 {
                     int c = layout.Columns[k];
                     ReadOnlySpan<byte> f = TrimSpaces(row[starts[c]..ends[c]]);
@@ -356,6 +367,10 @@ internal sealed class BlockCsvReducer
                 double mag = force.Length;
                 if (largest.Count < Largest || mag > largest[^1].Magnitude)
                 {
+                    if (scanned)
+                    {
+                        Split(row, starts, ends, out _);
+                    }
                     Keep(largest, new Contributor(Id(row, starts, ends, layout.Id, line, idPrefix), LoadKind.Force, force, Vector3.Zero, at, 1));
                 }
                 if (layout.Moments)
@@ -374,6 +389,38 @@ internal sealed class BlockCsvReducer
             return Error(Codes.OutOfRange, "values on this line overflow when multiplied (unit conversion or moment)", line, 1);
         }
         return new BlockResult(acc, largest, items, null);
+    }
+
+    // One pass over a line without quotes: skips text fields, parses number fields with the exact fast path and
+    // checks the field count. False for anything unusual; the caller then reads the line the general way.
+    private static bool ScanRow(ReadOnlySpan<byte> row, int[] valueOfField, Span<double> v)
+    {
+        int pos = 0;
+        for (int f = 0; f < valueOfField.Length; f++)
+        {
+            if (f > 0)
+            {
+                if (pos >= row.Length || row[pos] != (byte)',')
+                {
+                    return false;
+                }
+                pos++;
+            }
+            int k = valueOfField[f];
+            if (k < 0)
+            {
+                int comma = row[pos..].IndexOf((byte)',');
+                pos = comma < 0 ? row.Length : pos + comma;
+                continue;
+            }
+            if (!DecimalFastPath.TryParsePrefix(row[pos..], out double x, out int used))
+            {
+                return false;
+            }
+            v[k] = x;
+            pos += used;
+        }
+        return pos == row.Length;
     }
 
     private static bool Blank(ReadOnlySpan<byte> row)

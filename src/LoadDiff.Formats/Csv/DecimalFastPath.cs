@@ -14,9 +14,14 @@ internal static class DecimalFastPath
     ];
 
     /// <summary>Parses <c>[+-]digits[.digits][(e|E)[+-]digits]</c>; false when the text is of another form or too long for the fast path.</summary>
-    public static bool TryParse(ReadOnlySpan<byte> s, out double value)
+    public static bool TryParse(ReadOnlySpan<byte> s, out double value) =>
+        TryParsePrefix(s, out value, out int used) && used == s.Length;
+
+    /// <summary>As <see cref="TryParse"/> for the number at the start of <paramref name="s"/>; <paramref name="used"/> is its length.</summary>
+    public static bool TryParsePrefix(ReadOnlySpan<byte> s, out double value, out int used)
     {
         value = 0;
+        used = 0;
         int i = 0;
         bool negative = false;
         if (i < s.Length && (s[i] == (byte)'-' || s[i] == (byte)'+'))
@@ -87,10 +92,11 @@ internal static class DecimalFastPath
             }
             scale += expNegative ? -exp : exp;
         }
-        if (i != s.Length || scale < -22 || scale > 22)
+        if (scale < -22 || scale > 22)
         {
             return false;
         }
+        used = i;
         double m = mantissa;
         value = scale >= 0 ? m * Powers[scale] : m / Powers[-scale];
         if (negative)
