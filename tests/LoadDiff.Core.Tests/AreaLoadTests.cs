@@ -7,7 +7,7 @@ using static LoadDiff.Core.Tests.Support.Reduce;
 
 namespace LoadDiff.Core.Tests;
 
-public class AreaLoadTests
+public partial class AreaLoadTests
 {
     private static AreaLoad Area(double pressure, Vector3 gradient, Vector3 origin, Vector3? direction, params Vector3[] polygon) =>
         new("a", [.. polygon], pressure, direction, gradient, origin);

@@ -30,22 +30,27 @@ public sealed record AreaLoad(
     {
         Vector3 normal = PolygonGeometry.Analyse(Polygon).AreaVector.Normalize();
         Vector3 u = Direction is { } d ? d.Normalize() : normal;
-        Vector3 x0 = Polygon[0] - point;
-        double p0 = PressureAt(Polygon[0]);
+        // Integrate about the polygon's own first vertex (areas and first moments then do not depend on how far
+        // the reference point is), and move the first moments to the reference point once: ∫p(x − P) = ∫p(x − x0) + (x0 − P)∫p.
+        Vector3 origin = Polygon[0];
+        double p0 = PressureAt(origin);
         double total = 0, gross = 0;
         Vector3 first = Vector3.Zero, grossFirst = Vector3.Zero;
         for (int i = 1; i + 1 < Polygon.Length; i++)
         {
-            Vector3 xi = Polygon[i] - point, xj = Polygon[i + 1] - point;
-            double area = Vector3.Dot(Vector3.Cross(xi - x0, xj - x0), normal) * 0.5;
+            Vector3 xi = Polygon[i] - origin, xj = Polygon[i + 1] - origin;
+            double area = Vector3.Dot(Vector3.Cross(xi, xj), normal) * 0.5;
             double pi = PressureAt(Polygon[i]), pj = PressureAt(Polygon[i + 1]);
-            (double t, Vector3 f) = TriangleIntegrals.Of(area, x0, xi, xj, p0, pi, pj);
-            (double g, Vector3 gf) = TriangleIntegrals.OfAbsolute(area, x0, xi, xj, p0, pi, pj);
+            (double t, Vector3 f) = TriangleIntegrals.Of(area, Vector3.Zero, xi, xj, p0, pi, pj);
+            (double g, Vector3 gf) = TriangleIntegrals.OfAbsolute(area, Vector3.Zero, xi, xj, p0, pi, pj);
             total += t;
             first += f;
             gross += g;
             grossFirst += gf;
         }
+        Vector3 shift = origin - point;
+        first += shift * total;
+        grossFirst += shift * gross;
         return new Contribution(u * total, Vector3.Cross(first, u), gross, grossFirst, 0);
     }
 

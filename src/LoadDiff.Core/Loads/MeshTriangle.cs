@@ -26,12 +26,16 @@ public sealed record MeshTriangle(
     /// <summary>The exact contribution of a triangle with vertex pressures about <paramref name="point"/>, without building an item.</summary>
     public static Contribution Reduce(Vector3 pa, Vector3 pb, Vector3 pc, double pressureA, double pressureB, double pressureC, Vector3? direction, Vector3 point)
     {
-        Vector3 a = pa - point, b = pb - point, c = pc - point;
-        Vector3 areaVector = Vector3.Cross(b - a, c - a) * 0.5;
+        // About the first vertex, then moved once to the point (see AreaLoad): the area does not depend on the point.
+        Vector3 b = pb - pa, c = pc - pa;
+        Vector3 areaVector = Vector3.Cross(b, c) * 0.5;
         double area = areaVector.Length;
         Vector3 u = direction is { } d ? d.Normalize() : areaVector / area;
-        (double t, Vector3 f) = TriangleIntegrals.Of(area, a, b, c, pressureA, pressureB, pressureC);
-        (double g, Vector3 gf) = TriangleIntegrals.OfAbsolute(area, a, b, c, pressureA, pressureB, pressureC);
+        (double t, Vector3 f) = TriangleIntegrals.Of(area, Vector3.Zero, b, c, pressureA, pressureB, pressureC);
+        (double g, Vector3 gf) = TriangleIntegrals.OfAbsolute(area, Vector3.Zero, b, c, pressureA, pressureB, pressureC);
+        Vector3 shift = pa - point;
+        f += shift * t;
+        gf += shift * g;
         return new Contribution(u * t, Vector3.Cross(f, u), g, gf, 0);
     }
 
