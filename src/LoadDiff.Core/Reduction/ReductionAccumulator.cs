@@ -7,7 +7,7 @@ namespace LoadDiff.Core.Reduction;
 /// moments taken about an anchor point near the loads (the first located item unless given) so that
 /// coordinates far from the origin cost no accuracy. Memory is constant in the number of items.
 /// </summary>
-public sealed class ReductionAccumulator
+public sealed partial class ReductionAccumulator
 {
     // Forces whose direction differs from the first by more than this (relative) make the system non-parallel.
     private const double ParallelTolerance = 1e-9;

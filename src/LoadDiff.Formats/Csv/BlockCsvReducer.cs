@@ -1,5 +1,6 @@
 using System.Buffers;
 using System.Text;
+using Microsoft.Win32.SafeHandles;
 using csFastFloat;
 using LoadDiff.Core;
 using LoadDiff.Core.Loads;
@@ -26,6 +27,9 @@ internal sealed class BlockCsvReducer
     public const int BlockSize = 4 << 20;
 
     private const int Largest = 3;
+
+    // Rows per column batch handed to the accumulator.
+    private const int Batch = 512;
 
     private readonly string _display;
     private readonly ReadOptions _options;
@@ -71,81 +75,50 @@ internal sealed class BlockCsvReducer
 
     private void ReduceFile(string path, IReducedBlockSink sink, string? expected, string pointPrefix, string meshId, Vector3? direction, Func<long, long> countItems)
     {
-        using var stream = new FileStream(path, FileMode.Open, FileAccess.Read, FileShare.Read, 1, FileOptions.SequentialScan);
+        using SafeFileHandle handle = File.OpenHandle(path, FileMode.Open, FileAccess.Read, FileShare.Read, FileOptions.SequentialScan);
+        long fileLength = RandomAccess.GetLength(handle);
         int blockSize = Math.Max(BlockSize, (2 * _options.MaxLineLength) + 16);
-        byte[] carry = new byte[blockSize];
-        int carryLength = 0;
-        bool eof = false;
-        Layout layout = ReadHeader(stream, carry, ref carryLength, ref eof, expected);
+        (Layout layout, long dataStart) = ReadHeader(handle, fileLength, blockSize, expected);
         string idPrefix = layout.Name == CsvLayouts.TriangleRows ? meshId : pointPrefix;
-        long nextLine = 2;
+        var plan = new BlockPlan(handle, fileLength, dataStart, blockSize, layout, idPrefix, direction);
+        int count = (int)((fileLength - dataStart + blockSize - 1) / blockSize);
         ReductionAccumulator? meshTotal = layout.Name == CsvLayouts.TriangleRows ? new ReductionAccumulator() : null;
-        var pool = ArrayPool<byte>.Shared;
-        int batch = 2 * _threads;
-        var blocks = new (byte[] Data, int Length, long FirstLine)[batch];
-        var results = new BlockResult[batch];
-        while (carryLength > 0 || !eof)
+        long nextLine = 2;
+
+        void Merge(BlockResult r)
         {
-            int n = 0;
-            while (n < batch && (carryLength > 0 || !eof))
+            r.Failure?.Throw();
+            if (r.Error is { } e)
             {
-                byte[] data = pool.Rent(blockSize);
-                Buffer.BlockCopy(carry, 0, data, 0, carryLength);
-                int length = carryLength;
-                while (!eof && length < blockSize)
-                {
-                    int read = stream.Read(data, length, blockSize - length);
-                    if (read == 0)
-                    {
-                        eof = true;
-                    }
-                    length += read;
-                    _options.BytesRead?.Invoke(read);
-                }
-                int end = length;
-                if (!eof)
-                {
-                    int lastNewline = data.AsSpan(0, length).LastIndexOf((byte)'\n');
-                    if (lastNewline < 0)
-                    {
-                        throw Fail(Codes.LineTooLong, $"a line is longer than the limit of {_options.MaxLineLength} characters (raise it with --max-line-length)", nextLine, 1);
-                    }
-                    end = lastNewline + 1;
-                }
-                carryLength = length - end;
-                Buffer.BlockCopy(data, end, carry, 0, carryLength);
-                blocks[n] = (data, end, nextLine);
-                nextLine += data.AsSpan(0, end).Count((byte)'\n');
-                n++;
+                throw Fail(e.Code, e.Message, nextLine + e.Line - 1, e.Column);
             }
-            if (_threads == 1 || n == 1)
+            if (countItems(r.Items) > _options.MaxItems)
             {
-                for (int i = 0; i < n; i++)
-                {
-                    results[i] = ParseBlock(blocks[i].Data, blocks[i].Length, blocks[i].FirstLine, layout, idPrefix, direction);
-                }
+                throw Fail(Codes.TooManyItems, $"more than {_options.MaxItems} items (raise the limit with --max-items)", nextLine, 1);
             }
-            else
+            var largest = new List<Contributor>(r.Largest.Count);
+            foreach (LargestRow row in r.Largest)
             {
-                Parallel.For(0, n, new ParallelOptions { MaxDegreeOfParallelism = _threads },
-                    i => results[i] = ParseBlock(blocks[i].Data, blocks[i].Length, blocks[i].FirstLine, layout, idPrefix, direction));
+                string id = row.Id ?? "row" + (nextLine + row.Line - 1).ToString(System.Globalization.CultureInfo.InvariantCulture);
+                largest.Add(new Contributor(idPrefix.Length > 0 ? idPrefix + "/" + id : id, LoadKind.Force, row.Force, Vector3.Zero, row.At, 1));
             }
-            for (int i = 0; i < n; i++)
+            sink.AddReducedBlock(r.Accumulator, meshTotal is null ? largest : []);
+            meshTotal?.AddScaled(r.Accumulator, 1);
+            nextLine += r.Newlines;
+            _options.BytesRead?.Invoke(r.Bytes);
+        }
+
+        if (_threads == 1 || count <= 1)
+        {
+            var worker = new BlockWorker(this, plan);
+            for (int k = 0; k < count; k++)
             {
-                pool.Return(blocks[i].Data);
-                BlockResult r = results[i];
-                if (r.Error is { } error)
-                {
-                    throw new InputError(error);
-                }
-                if (countItems(r.Items) > _options.MaxItems)
-                {
-                    throw Fail(Codes.TooManyItems, $"more than {_options.MaxItems} items (raise the limit with --max-items)", blocks[i].FirstLine, 1);
-                }
-                sink.AddReducedBlock(r.Accumulator, meshTotal is null ? r.Largest : []);
-                meshTotal?.AddScaled(r.Accumulator, 1);
-                results[i] = default;
+                Merge(worker.Parse(k));
             }
+        }
+        else
+        {
+            ParseInParallel(plan, count, Merge);
         }
         if (meshTotal is { Count: > 0 })
         {
@@ -155,24 +128,83 @@ internal sealed class BlockCsvReducer
         }
     }
 
-    private Layout ReadHeader(FileStream stream, byte[] carry, ref int carryLength, ref bool eof, string? expected)
+    // Worker threads take blocks in file order and parse them; this thread merges the results in file order as
+    // they arrive (so progress and the item limit are seen early) and stops the workers at the first error.
+    private void ParseInParallel(BlockPlan plan, int count, Action<BlockResult> merge)
     {
-        int newline;
-        while ((newline = carry.AsSpan(0, carryLength).IndexOf((byte)'\n')) < 0 && !eof)
+        var results = new BlockResult?[count];
+        var gate = new object();
+        int next = -1, stopAfter = int.MaxValue;
+        void Work()
         {
-            if (carryLength == carry.Length)
+            var worker = new BlockWorker(this, plan);
+            int k;
+            while ((k = Interlocked.Increment(ref next)) < count && k <= Volatile.Read(ref stopAfter))
             {
-                throw Fail(Codes.LineTooLong, $"the header is longer than the limit of {_options.MaxLineLength} characters", 1, 1);
+                BlockResult r;
+                try
+                {
+                    r = worker.Parse(k);
+                }
+                catch (Exception e) when (e is not OutOfMemoryException)
+                {
+                    r = BlockResult.Failed(System.Runtime.ExceptionServices.ExceptionDispatchInfo.Capture(e));
+                }
+                if (r.Error is not null || r.Failure is not null)
+                {
+                    int seen;
+                    while (k < (seen = Volatile.Read(ref stopAfter)) && Interlocked.CompareExchange(ref stopAfter, k, seen) != seen)
+                    {
+                    }
+                }
+                lock (gate)
+                {
+                    results[k] = r;
+                    Monitor.PulseAll(gate);
+                }
             }
-            int read = stream.Read(carry, carryLength, carry.Length - carryLength);
-            if (read == 0)
-            {
-                eof = true;
-            }
-            carryLength += read;
         }
-        int headerEnd = newline < 0 ? carryLength : newline;
-        ReadOnlySpan<byte> headerBytes = carry.AsSpan(0, headerEnd);
+        var workers = new Task[Math.Min(_threads, count)];
+        for (int i = 0; i < workers.Length; i++)
+        {
+            workers[i] = Task.Factory.StartNew(Work, CancellationToken.None, TaskCreationOptions.LongRunning, TaskScheduler.Default);
+        }
+        try
+        {
+            for (int k = 0; k < count; k++)
+            {
+                BlockResult r;
+                lock (gate)
+                {
+                    while (results[k] is null)
+                    {
+                        Monitor.Wait(gate);
+                    }
+                    r = results[k]!;
+                    results[k] = null;
+                }
+                merge(r);
+            }
+        }
+        finally
+        {
+            // an error or the item limit ends the reading: let the workers finish their block and stop
+            Volatile.Write(ref stopAfter, -1);
+            Task.WaitAll(workers);
+        }
+    }
+
+    private (Layout Layout, long DataStart) ReadHeader(SafeFileHandle handle, long fileLength, int blockSize, string? expected)
+    {
+        byte[] head = new byte[(int)Math.Min(fileLength, blockSize)];
+        int got = ReadAt(handle, 0, head, 0, head.Length);
+        int newline = head.AsSpan(0, got).IndexOf((byte)'\n');
+        if (newline < 0 && got < fileLength)
+        {
+            throw Fail(Codes.LineTooLong, $"the header is longer than the limit of {_options.MaxLineLength} characters", 1, 1);
+        }
+        int headerEnd = newline < 0 ? got : newline;
+        ReadOnlySpan<byte> headerBytes = head.AsSpan(0, headerEnd);
         if (headerBytes.StartsWith((ReadOnlySpan<byte>)[0xEF, 0xBB, 0xBF]))
         {
             headerBytes = headerBytes[3..];
@@ -202,9 +234,7 @@ internal sealed class BlockCsvReducer
                 throw Fail(Codes.CsvDuplicateColumn, $"column '{names[i]}' appears twice in the header", 1, column + lead);
             }
         }
-        int consumed = newline < 0 ? carryLength : newline + 1;
-        Buffer.BlockCopy(carry, consumed, carry, 0, carryLength - consumed);
-        carryLength -= consumed;
+        long dataStart = newline < 0 ? got : newline + 1;
         string layout = expected ?? CsvLoadReader.DetectLayout(names)
             ?? throw Fail(Codes.CsvUnknownLayout, "cannot tell the layout from the header: a point-load table has fx, fy, fz; a triangle mesh has x1 … p3", 1, 1);
         string[] required = layout == CsvLayouts.PointLoads
@@ -235,116 +265,374 @@ internal sealed class BlockCsvReducer
                 moments = true;
             }
         }
-        return new Layout(layout, [.. columns], Array.IndexOf(names, "id"), names.Length, moments, names);
+        return (new Layout(layout, [.. columns], Array.IndexOf(names, "id"), names.Length, moments, names), dataStart);
     }
 
-    private readonly struct BlockResult
+    // Reads count bytes at offset, fewer only at the end of the file.
+    private static int ReadAt(SafeFileHandle handle, long offset, byte[] buffer, int index, int count)
     {
-        public BlockResult(ReductionAccumulator accumulator, List<Contributor> largest, long items, Diagnostic? error)
+        int total = 0;
+        while (total < count)
         {
-            Accumulator = accumulator;
-            Largest = largest;
-            Items = items;
-            Error = error;
+            int read = RandomAccess.Read(handle, buffer.AsSpan(index + total, count - total), offset + total);
+            if (read == 0)
+            {
+                break;
+            }
+            total += read;
+        }
+        return total;
+    }
+
+    /// <summary>What every block needs to know of the file.</summary>
+    private sealed record BlockPlan(SafeFileHandle Handle, long FileLength, long DataStart, int BlockSize, Layout Layout, string IdPrefix, Vector3? Direction);
+
+    /// <summary>An error found in a block, at a line counted from the block's first line (1).</summary>
+    private sealed record BlockError(string Code, string Message, long Line, int Column);
+
+    /// <summary>One of the largest forces of a block; <see cref="Id"/> is null when the file has no id column.</summary>
+    private sealed record LargestRow(string? Id, long Line, Vector3 Force, Vector3 At, double Magnitude);
+
+    private sealed class BlockResult
+    {
+        public ReductionAccumulator Accumulator { get; init; } = new();
+
+        public List<LargestRow> Largest { get; init; } = [];
+
+        public long Items { get; init; }
+
+        /// <summary>Line feeds in the block: the first line of the next block is this many lines further on.</summary>
+        public long Newlines { get; init; }
+
+        public long Bytes { get; init; }
+
+        public BlockError? Error { get; init; }
+
+        public System.Runtime.ExceptionServices.ExceptionDispatchInfo? Failure { get; init; }
+
+        public static BlockResult Failed(System.Runtime.ExceptionServices.ExceptionDispatchInfo failure) => new() { Failure = failure };
+    }
+
+    /// <summary>
+    /// Parses blocks: block k holds the lines that start within its fixed byte range of the data, read with its
+    /// own positioned read (so workers read in parallel too). Buffers and column arrays are kept between blocks.
+    /// </summary>
+    private sealed class BlockWorker
+    {
+        // Bytes read past a block's range to find the end of its last line; more are read when it is longer.
+        private const int Lookahead = 4096;
+
+        private readonly BlockCsvReducer _reducer;
+        private readonly BlockPlan _plan;
+        private readonly int[] _valueOfField;
+        private readonly double[] _x = new double[Batch], _y = new double[Batch], _z = new double[Batch];
+        private readonly double[] _fx = new double[Batch], _fy = new double[Batch], _fz = new double[Batch];
+        private readonly double[] _magnitude = new double[Batch];
+        private readonly int[] _rowStart = new int[Batch], _rowEnd = new int[Batch];
+        private readonly long[] _rowLine = new long[Batch];
+        private readonly double[] _digits, _scales;
+        private readonly int[] _starts, _ends;
+        private byte[] _buffer;
+
+        public BlockWorker(BlockCsvReducer reducer, BlockPlan plan)
+        {
+            _reducer = reducer;
+            _plan = plan;
+            _buffer = new byte[plan.BlockSize + Lookahead + PlainRowScanner.Padding + 1];
+            _valueOfField = new int[plan.Layout.FieldCount];
+            _starts = new int[plan.Layout.FieldCount + 1];
+            _digits = new double[plan.Layout.Columns.Length * Batch];
+            _scales = new double[plan.Layout.Columns.Length * Batch];
+            _ends = new int[plan.Layout.FieldCount + 1];
+            Array.Fill(_valueOfField, -1);
+            for (int k = 0; k < plan.Layout.Columns.Length; k++)
+            {
+                _valueOfField[plan.Layout.Columns[k]] = k;
+            }
         }
 
-        public ReductionAccumulator Accumulator { get; }
+        public BlockResult Parse(int k)
+        {
+            BlockPlan p = _plan;
+            long s = p.DataStart + ((long)k * p.BlockSize);
+            long sNext = Math.Min(s + p.BlockSize, p.FileLength);
+            long r0 = k == 0 ? s : s - 1;
+            int length = Fill(r0, 0, (int)(Math.Min(p.FileLength, sNext + Lookahead) - r0));
+            int begin = 0;
+            if (k > 0)
+            {
+                int first = _buffer.AsSpan(0, (int)(sNext - 1 - r0)).IndexOf((byte)'\n');
+                if (first < 0)
+                {
+                    return new BlockResult(); // no line starts here: the block before owns them
+                }
+                begin = first + 1;
+            }
+            int end;
+            if (sNext == p.FileLength)
+            {
+                end = length;
+            }
+            else
+            {
+                int from = (int)(sNext - 1 - r0);
+                while (true)
+                {
+                    int q = _buffer.AsSpan(from, length - from).IndexOf((byte)'\n');
+                    if (q >= 0)
+                    {
+                        end = from + q + 1;
+                        break;
+                    }
+                    if (r0 + length >= p.FileLength)
+                    {
+                        end = length;
+                        break;
+                    }
+                    int lastStart = _buffer.AsSpan(begin, (int)(sNext - 1 - r0) - begin).LastIndexOf((byte)'\n') + 1 + begin;
+                    if (length - lastStart > _reducer._options.MaxLineLength)
+                    {
+                        long line = 1 + _buffer.AsSpan(begin, lastStart - begin).Count((byte)'\n');
+                        return new BlockResult
+                        {
+                            Error = new BlockError(Codes.LineTooLong, $"a line is longer than the limit of {_reducer._options.MaxLineLength} characters (raise it with --max-line-length)", line, 1),
+                        };
+                    }
+                    from = length;
+                    length = Fill(r0, length, (int)Math.Min(p.FileLength - r0 - length, Lookahead * 16L));
+                }
+            }
+            _buffer[end] = (byte)'\n'; // the scanner's sentinel
+            return _reducer.ParseBlock(this, begin, end);
+        }
 
-        public List<Contributor> Largest { get; }
+        // Reads count bytes of the file at r0 + index into the buffer at index, growing it when needed; returns index + count.
+        private int Fill(long r0, int index, int count)
+        {
+            int need = index + count + PlainRowScanner.Padding + 1;
+            if (need > _buffer.Length)
+            {
+                Array.Resize(ref _buffer, Math.Max(need, _buffer.Length + (_buffer.Length / 2)));
+            }
+            int got = ReadAt(_plan.Handle, r0 + index, _buffer, index, count);
+            if (got < count)
+            {
+                throw new IOException("the file became shorter while it was read");
+            }
+            return index + count;
+        }
 
-        public long Items { get; }
+        public BlockPlan Plan => _plan;
 
-        public Diagnostic? Error { get; }
+        public double[] Digits => _digits;
+
+        public double[] Scales => _scales;
+
+        public int[] Starts => _starts;
+
+        public int[] Ends => _ends;
+
+        public byte[] Buffer => _buffer;
+
+        public int[] ValueOfField => _valueOfField;
+
+        public double[] X => _x;
+
+        public double[] Y => _y;
+
+        public double[] Z => _z;
+
+        public double[] Fx => _fx;
+
+        public double[] Fy => _fy;
+
+        public double[] Fz => _fz;
+
+        public double[] Magnitude => _magnitude;
+
+        public int[] RowStart => _rowStart;
+
+        public int[] RowEnd => _rowEnd;
+
+        public long[] RowLine => _rowLine;
     }
 
-    private BlockResult ParseBlock(byte[] data, int length, long firstLine, Layout layout, string idPrefix, Vector3? direction)
+    // into[i] = digits / scale · factor for the rows of column k: the quotient is the correctly rounded value read,
+    // the factor the unit conversion (the same two roundings as reading the number and converting it).
+    private static void Divide(double[] digits, double[] scales, int k, int n, double factor, double[] into)
     {
-        var acc = new ReductionAccumulator();
-        var largest = new List<Contributor>(Largest + 1);
-        Span<int> starts = stackalloc int[layout.FieldCount + 1];
-        Span<int> ends = stackalloc int[layout.FieldCount + 1];
-        Span<double> v = stackalloc double[layout.Columns.Length];
-        long line = firstLine - 1;
-        long items = 0;
-        int pos = 0;
-        if (!System.Text.Unicode.Utf8.IsValid(data.AsSpan(0, length)))
+        ReadOnlySpan<double> d = digits.AsSpan(k * Batch, n), s = scales.AsSpan(k * Batch, n);
+        int i = 0;
+        if (System.Numerics.Vector.IsHardwareAccelerated)
         {
-            int bad = FirstInvalid(data.AsSpan(0, length));
+            var f = new System.Numerics.Vector<double>(factor);
+            for (; i <= n - System.Numerics.Vector<double>.Count; i += System.Numerics.Vector<double>.Count)
+            {
+                (new System.Numerics.Vector<double>(d[i..]) / new System.Numerics.Vector<double>(s[i..]) * f).CopyTo(into, i);
+            }
+        }
+        for (; i < n; i++)
+        {
+            into[i] = d[i] / s[i] * factor;
+        }
+    }
+
+    private BlockResult ParseBlock(BlockWorker w, int begin, int length)
+    {
+        byte[] data = w.Buffer;
+        Layout layout = w.Plan.Layout;
+        var acc = new ReductionAccumulator();
+        var largest = new List<LargestRow>(Largest + 1);
+        int[] starts = w.Starts, ends = w.Ends;
+        Span<double> v = stackalloc double[layout.Columns.Length];
+        long line = 0;
+        long items = 0;
+        int pos = begin;
+        int batched = 0;
+        BlockResult Error(string code, string message, long atLine, int column) =>
+            new() { Error = new BlockError(code, message, atLine, column) };
+        if (!System.Text.Unicode.Utf8.IsValid(data.AsSpan(begin, length - begin)))
+        {
+            int bad = begin + FirstInvalid(data.AsSpan(begin, length - begin));
             int lineStartOfBad = data.AsSpan(0, bad).LastIndexOf((byte)'\n') + 1;
             return Error(Codes.InvalidUtf8, $"invalid UTF-8 byte 0x{data[bad]:X2}; CSV files must be UTF-8 text",
-                firstLine + data.AsSpan(0, bad).Count((byte)'\n'), Column(data, lineStartOfBad, bad - lineStartOfBad));
+                1 + data.AsSpan(begin, bad - begin).Count((byte)'\n'), Column(data, Math.Max(lineStartOfBad, begin), bad - Math.Max(lineStartOfBad, begin)));
         }
         double fl = _units.Length, ff = _units.Force, fm = _units.Moment, fp = _units.Pressure;
         bool triangles = layout.Name == CsvLayouts.TriangleRows;
-        // Blocks without quotes take a one-pass scanner; any line it cannot read is read again by the general path,
-        // which also words every error.
-        bool plain = data.AsSpan(0, length).IndexOf((byte)'"') < 0;
-        int[] valueOfField = new int[layout.FieldCount];
-        Array.Fill(valueOfField, -1);
-        for (int k = 0; k < layout.Columns.Length; k++)
+        Vector3? direction = w.Plan.Direction;
+        int[] valueOfField = w.ValueOfField;
+        double[] digits = w.Digits, scales = w.Scales;
+        int maxLine = _options.MaxLineLength;
+
+        // Hands the batched rows to the accumulator, then looks among them for the largest forces.
+        BlockResult? Flush()
         {
-            valueOfField[layout.Columns[k]] = k;
+            int n = batched;
+            batched = 0;
+            Divide(digits, scales, 0, n, fl, w.X);
+            Divide(digits, scales, 1, n, fl, w.Y);
+            Divide(digits, scales, 2, n, fl, w.Z);
+            Divide(digits, scales, 3, n, ff, w.Fx);
+            Divide(digits, scales, 4, n, ff, w.Fy);
+            Divide(digits, scales, 5, n, ff, w.Fz);
+            if (!acc.AddPointForces(w.X.AsSpan(0, n), w.Y.AsSpan(0, n), w.Z.AsSpan(0, n), w.Fx.AsSpan(0, n), w.Fy.AsSpan(0, n), w.Fz.AsSpan(0, n), w.Magnitude))
+            {
+                // a term overflowed: add the rows one at a time to find the line
+                for (int i = 0; i < n; i++)
+                {
+                    try
+                    {
+                        Vector3 at = Vector3.Create(w.X[i], w.Y[i], w.Z[i]), force = Vector3.Create(w.Fx[i], w.Fy[i], w.Fz[i]);
+                        acc.AddPointForce(at, force);
+                        w.Magnitude[i] = force.Length;
+                    }
+                    catch (Exception e) when (e is OverflowException or ArgumentException)
+                    {
+                        return Error(Codes.OutOfRange, "values on this line overflow when multiplied (unit conversion or moment)", w.RowLine[i], 1);
+                    }
+                }
+            }
+            for (int i = 0; i < n; i++)
+            {
+                double mag = w.Magnitude[i];
+                if (largest.Count < Largest || mag > largest[^1].Magnitude)
+                {
+                    ReadOnlySpan<byte> row = data.AsSpan(w.RowStart[i], w.RowEnd[i] - w.RowStart[i]);
+                    string? id = null;
+                    if (layout.Id >= 0)
+                    {
+                        Split(row, starts, ends, out _);
+                        id = Encoding.UTF8.GetString(row[starts[layout.Id]..ends[layout.Id]]).Trim().Trim('"');
+                    }
+                    Keep(largest, new LargestRow(id, w.RowLine[i], Vector3.Create(w.Fx[i], w.Fy[i], w.Fz[i]), Vector3.Create(w.X[i], w.Y[i], w.Z[i]), mag));
+                }
+            }
+            return null;
         }
+
         try
         {
             while (pos < length)
             {
                 line++;
-                int nl = data.AsSpan(pos, length - pos).IndexOf((byte)'\n');
-                int lineEnd = nl < 0 ? length : pos + nl;
-                int next = lineEnd + 1;
-                if (lineEnd > pos && data[lineEnd - 1] == (byte)'\r')
-                {
-                    lineEnd--;
-                }
-                ReadOnlySpan<byte> row = data.AsSpan(pos, lineEnd - pos);
                 int lineStart = pos;
-                pos = next;
-                if (row.Length > _options.MaxLineLength)
+                if (data[pos] == (byte)'\n')
                 {
-                    return Error(Codes.LineTooLong, $"line is longer than the limit of {_options.MaxLineLength} characters (raise it with --max-line-length)", line, 1);
-                }
-                if (row.IsEmpty || (row[0] <= (byte)' ' && Blank(row)))
-                {
+                    pos++;
                     continue;
                 }
-                bool scanned = plain && ScanRow(row, valueOfField, v);
-                string? splitError = null;
-                int fields = scanned ? layout.FieldCount : Split(row, starts, ends, out splitError);
-                if (!scanned && splitError is not null)
+                // points are batched (slot = row in the batch); other layouts use the first slot only
+                int slot = triangles ? 0 : batched;
+                int lineEnd = PlainRowScanner.TryScan(data, pos, valueOfField, digits, scales, Batch, slot);
+                bool scanned = lineEnd >= 0;
+                if (scanned)
                 {
-                    return Error(Codes.CsvRaggedRow, splitError, line, 1);
-                }
-                if (fields != layout.FieldCount)
-                {
-                    return Error(Codes.CsvRaggedRow, $"row has {fields} fields, the header has {layout.FieldCount}", line, 1);
-                }
-                for (int k = 0; !scanned && k < layout.Columns.Length; k++)
-                {
-                    int c = layout.Columns[k];
-                    ReadOnlySpan<byte> f = TrimSpaces(row[starts[c]..ends[c]]);
-                    double x;
-                    int used = f.Length;
-                    if (!DecimalFastPath.TryParse(f, out x)
-                        && (!FastDoubleParser.TryParseDouble(f, out used, out x) || used != f.Length || f.Length == 0 || !double.IsFinite(x)))
+                    pos = lineEnd + (data[lineEnd] == (byte)'\r' ? 2 : 1);
+                    if (lineEnd - lineStart > maxLine)
                     {
-                        // a quoted field is reported at its opening quote
-                        int quoteAt = starts[c] > 0 && row[starts[c] - 1] == (byte)'"' ? starts[c] - 1 : starts[c];
-                        string text = Text(f), name = layout.Names[c];
-                        return IsNonFiniteWord(text)
-                            ? Error(Codes.NotFinite, $"'{text}' in column '{name}' is not accepted: NaN and infinity are input errors", line, Column(data, lineStart, quoteAt))
-                            : used == f.Length && f.Length > 0
-                                ? Error(Codes.NotFinite, $"'{text}' in column '{name}' overflows a double", line, Column(data, lineStart, quoteAt))
-                                : Error(Codes.CsvBadNumber, $"'{text}' in column '{name}' is not a number (use a point as decimal separator)", line, Column(data, lineStart, quoteAt));
+                        return Error(Codes.LineTooLong, $"line is longer than the limit of {maxLine} characters (raise it with --max-line-length)", line, 1);
                     }
-                    if (Math.Abs(x) > Codes.MaxMagnitude)
+                }
+                else
+                {
+                    int nl = data.AsSpan(pos, length - pos).IndexOf((byte)'\n');
+                    lineEnd = nl < 0 ? length : pos + nl;
+                    pos = lineEnd + 1;
+                    if (lineEnd > lineStart && data[lineEnd - 1] == (byte)'\r')
                     {
-                        return Error(Codes.OutOfRange, $"'{Text(f)}' in column '{layout.Names[c]}' exceeds the largest magnitude accepted (1e100)", line, Column(data, lineStart, starts[c]));
+                        lineEnd--;
                     }
-                    v[k] = x;
+                    ReadOnlySpan<byte> row = data.AsSpan(lineStart, lineEnd - lineStart);
+                    if (row.Length > maxLine)
+                    {
+                        return Error(Codes.LineTooLong, $"line is longer than the limit of {maxLine} characters (raise it with --max-line-length)", line, 1);
+                    }
+                    if (row.IsEmpty || (row[0] <= (byte)' ' && Blank(row)))
+                    {
+                        continue;
+                    }
+                    int fields = Split(row, starts, ends, out string? splitError);
+                    if (splitError is not null)
+                    {
+                        return Error(Codes.CsvRaggedRow, splitError, line, 1);
+                    }
+                    if (fields != layout.FieldCount)
+                    {
+                        return Error(Codes.CsvRaggedRow, $"row has {fields} fields, the header has {layout.FieldCount}", line, 1);
+                    }
+                    for (int k = 0; k < layout.Columns.Length; k++)
+                    {
+                        int c = layout.Columns[k];
+                        ReadOnlySpan<byte> f = TrimSpaces(row[starts[c]..ends[c]]);
+                        double x;
+                        int used = f.Length;
+                        if (!DecimalFastPath.TryParse(f, out x)
+                            && (!FastDoubleParser.TryParseDouble(f, out used, out x) || used != f.Length || f.Length == 0 || !double.IsFinite(x)))
+                        {
+                            // a quoted field is reported at its opening quote
+                            int quoteAt = starts[c] > 0 && row[starts[c] - 1] == (byte)'"' ? starts[c] - 1 : starts[c];
+                            string text = Text(f), name = layout.Names[c];
+                            return IsNonFiniteWord(text)
+                                ? Error(Codes.NotFinite, $"'{text}' in column '{name}' is not accepted: NaN and infinity are input errors", line, Column(data, lineStart, quoteAt))
+                                : used == f.Length && f.Length > 0
+                                    ? Error(Codes.NotFinite, $"'{text}' in column '{name}' overflows a double", line, Column(data, lineStart, quoteAt))
+                                    : Error(Codes.CsvBadNumber, $"'{text}' in column '{name}' is not a number (use a point as decimal separator)", line, Column(data, lineStart, quoteAt));
+                        }
+                        if (Math.Abs(x) > Codes.MaxMagnitude)
+                        {
+                            return Error(Codes.OutOfRange, $"'{Text(f)}' in column '{layout.Names[c]}' exceeds the largest magnitude accepted (1e100)", line, Column(data, lineStart, starts[c]));
+                        }
+                        digits[(k * Batch) + slot] = x;
+                        scales[(k * Batch) + slot] = 1;
+                    }
                 }
                 if (triangles)
                 {
+                    for (int k = 0; k < v.Length; k++)
+                    {
+                        v[k] = digits[k * Batch] / scales[k * Batch];
+                    }
                     Vector3 a = Vector3.Create(v[0] * fl, v[1] * fl, v[2] * fl);
                     Vector3 b = Vector3.Create(v[3] * fl, v[4] * fl, v[5] * fl);
                     Vector3 c = Vector3.Create(v[6] * fl, v[7] * fl, v[8] * fl);
@@ -360,67 +648,38 @@ internal sealed class BlockCsvReducer
                     items++;
                     continue;
                 }
-                Vector3 at = Vector3.Create(v[0] * fl, v[1] * fl, v[2] * fl);
-                Vector3 force = Vector3.Create(v[3] * ff, v[4] * ff, v[5] * ff);
-                acc.AddPointForce(at, force);
+                batched++;
+                w.RowStart[slot] = lineStart;
+                w.RowEnd[slot] = lineEnd;
+                w.RowLine[slot] = line;
                 items++;
-                double mag = force.Length;
-                if (largest.Count < Largest || mag > largest[^1].Magnitude)
-                {
-                    if (scanned)
-                    {
-                        Split(row, starts, ends, out _);
-                    }
-                    Keep(largest, new Contributor(Id(row, starts, ends, layout.Id, line, idPrefix), LoadKind.Force, force, Vector3.Zero, at, 1));
-                }
                 if (layout.Moments)
                 {
-                    Vector3 m = Vector3.Create(v[6] * fm, v[7] * fm, v[8] * fm);
+                    Vector3 m = Vector3.Create(
+                        digits[(6 * Batch) + slot] / scales[(6 * Batch) + slot] * fm,
+                        digits[(7 * Batch) + slot] / scales[(7 * Batch) + slot] * fm,
+                        digits[(8 * Batch) + slot] / scales[(8 * Batch) + slot] * fm);
                     if (!m.IsZero)
                     {
                         acc.AddCouple(m);
                         items++;
                     }
                 }
+                if (batched == Batch && Flush() is { } failed)
+                {
+                    return failed;
+                }
+            }
+            if (batched > 0 && Flush() is { } lastFailed)
+            {
+                return lastFailed;
             }
         }
-        catch (OverflowException)
+        catch (Exception e) when (e is OverflowException or ArgumentException)
         {
             return Error(Codes.OutOfRange, "values on this line overflow when multiplied (unit conversion or moment)", line, 1);
         }
-        return new BlockResult(acc, largest, items, null);
-    }
-
-    // One pass over a line without quotes: skips text fields, parses number fields with the exact fast path and
-    // checks the field count. False for anything unusual; the caller then reads the line the general way.
-    private static bool ScanRow(ReadOnlySpan<byte> row, int[] valueOfField, Span<double> v)
-    {
-        int pos = 0;
-        for (int f = 0; f < valueOfField.Length; f++)
-        {
-            if (f > 0)
-            {
-                if (pos >= row.Length || row[pos] != (byte)',')
-                {
-                    return false;
-                }
-                pos++;
-            }
-            int k = valueOfField[f];
-            if (k < 0)
-            {
-                int comma = row[pos..].IndexOf((byte)',');
-                pos = comma < 0 ? row.Length : pos + comma;
-                continue;
-            }
-            if (!DecimalFastPath.TryParsePrefix(row[pos..], out double x, out int used))
-            {
-                return false;
-            }
-            v[k] = x;
-            pos += used;
-        }
-        return pos == row.Length;
+        return new BlockResult { Accumulator = acc, Largest = largest, Items = items, Newlines = length > begin && data[length - 1] != (byte)'\n' ? line - 1 : line, Bytes = length - begin };
     }
 
     private static bool Blank(ReadOnlySpan<byte> row)
@@ -464,7 +723,7 @@ internal sealed class BlockCsvReducer
         return 0;
     }
 
-    private static void Keep(List<Contributor> list, Contributor c)
+    private static void Keep(List<LargestRow> list, LargestRow c)
     {
         int i = list.FindIndex(x => c.Magnitude > x.Magnitude);
         list.Insert(i < 0 ? list.Count : i, c);
@@ -472,14 +731,6 @@ internal sealed class BlockCsvReducer
         {
             list.RemoveAt(list.Count - 1);
         }
-    }
-
-    private static string Id(ReadOnlySpan<byte> row, Span<int> starts, Span<int> ends, int column, long line, string prefix)
-    {
-        string id = column >= 0
-            ? Encoding.UTF8.GetString(row[starts[column]..ends[column]]).Trim().Trim('"')
-            : "row" + line.ToString(System.Globalization.CultureInfo.InvariantCulture);
-        return prefix.Length > 0 ? prefix + "/" + id : id;
     }
 
     // Splits one line into fields; a field may be double-quoted ("" is a quote). Returns the field count.
@@ -560,9 +811,6 @@ internal sealed class BlockCsvReducer
     // The words the invariant culture reads as non-finite numbers.
     private static bool IsNonFiniteWord(string s) =>
         s.TrimStart('+', '-').ToLowerInvariant() is "nan" or "infinity" or "∞";
-
-    private BlockResult Error(string code, string message, long line, int column) =>
-        new(new ReductionAccumulator(), [], 0, new Diagnostic(code, Severity.Error, message, new SourceLocation(_display, (int)Math.Min(line, int.MaxValue), column)));
 
     private InputError Fail(string code, string message, long line, int column) =>
         new(new Diagnostic(code, Severity.Error, message, new SourceLocation(_display, (int)Math.Min(line, int.MaxValue), column)));
