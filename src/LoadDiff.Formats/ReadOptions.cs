@@ -38,6 +38,9 @@ public sealed record ReadOptions
     /// <summary>Longest CSV line accepted, in characters.</summary>
     public int MaxLineLength { get; init; } = 1 << 20;
 
+    /// <summary>Bytes per block of the parallel CSV reader when set (tests cut small blocks to reach every boundary case).</summary>
+    internal int? CsvBlockSize { get; init; }
+
     /// <summary>
     /// Called with a count of bytes each time the reader takes more input: CSV files as they stream, a JSON file once
     /// it is in memory. For progress displays; null for none.

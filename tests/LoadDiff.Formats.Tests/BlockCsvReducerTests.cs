@@ -11,7 +11,7 @@ using CollectingSink = LoadDiff.Formats.Tests.Support.CollectingSink;
 
 namespace LoadDiff.Formats.Tests;
 
-public class BlockCsvReducerTests
+public partial class BlockCsvReducerTests
 {
     private static string F(double v) => v.ToString("R", CultureInfo.InvariantCulture);
 

@@ -77,7 +77,7 @@ internal sealed class BlockCsvReducer
     {
         using SafeFileHandle handle = File.OpenHandle(path, FileMode.Open, FileAccess.Read, FileShare.Read, FileOptions.SequentialScan);
         long fileLength = RandomAccess.GetLength(handle);
-        int blockSize = Math.Max(BlockSize, (2 * _options.MaxLineLength) + 16);
+        int blockSize = _options.CsvBlockSize ?? Math.Max(BlockSize, (2 * _options.MaxLineLength) + 16);
         (Layout layout, long dataStart) = ReadHeader(handle, fileLength, blockSize, expected);
         string idPrefix = layout.Name == CsvLayouts.TriangleRows ? meshId : pointPrefix;
         var plan = new BlockPlan(handle, fileLength, dataStart, blockSize, layout, idPrefix, direction);
@@ -196,7 +196,7 @@ internal sealed class BlockCsvReducer
 
     private (Layout Layout, long DataStart) ReadHeader(SafeFileHandle handle, long fileLength, int blockSize, string? expected)
     {
-        byte[] head = new byte[(int)Math.Min(fileLength, blockSize)];
+        byte[] head = new byte[(int)Math.Min(fileLength, (long)_options.MaxLineLength + 2)];
         int got = ReadAt(handle, 0, head, 0, head.Length);
         int newline = head.AsSpan(0, got).IndexOf((byte)'\n');
         if (newline < 0 && got < fileLength)

@@ -28,6 +28,9 @@ internal static class PlainRowScanner
 
     private const ulong MaxExact = 1UL << 53;
 
+    /// <summary>Takes the code written for processors without AVX2 and SSE4.1 (ARM, old x64) on any processor; for tests.</summary>
+    internal static bool Portable { get; set; }
+
     private static readonly double[] Powers = [1e0, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11, 1e12, 1e13, 1e14, 1e15, 1e16];
 
     private static readonly ulong[] IntegerPowers =
@@ -113,7 +116,7 @@ internal static class PlainRowScanner
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private static void Classify(ref byte line, int offset, out ulong commas, out ulong feeds, out bool quote)
     {
-        if (Vector256.IsHardwareAccelerated)
+        if (Vector256.IsHardwareAccelerated && !Portable)
         {
             Vector256<byte> c = Vector256.Create((byte)','), n = Vector256.Create((byte)'\n'), q = Vector256.Create((byte)'"');
             Vector256<byte> a = Vector256.LoadUnsafe(ref line, (nuint)offset), b = Vector256.LoadUnsafe(ref line, (nuint)offset + 32);
@@ -161,7 +164,7 @@ internal static class PlainRowScanner
         int dot = dots == 0 ? length : BitOperations.TrailingZeroCount(dots);
         int whole = dot - sign;
         int fraction = dots == 0 ? 0 : length - dot - 1;
-        ulong mantissa = Sse41.IsSupported
+        ulong mantissa = Sse41.IsSupported && !Portable
             ? DigitsSimd(v, sign, whole, fraction)
             : (Digits(ref Unsafe.Add(ref s, sign), whole) * IntegerPowers[fraction]) + Digits(ref Unsafe.Add(ref s, dot + 1), fraction);
         if (mantissa > MaxExact)
