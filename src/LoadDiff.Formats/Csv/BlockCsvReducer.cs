@@ -24,7 +24,7 @@ namespace LoadDiff.Formats.Csv;
 internal sealed class BlockCsvReducer
 {
     /// <summary>Size of one block of lines.</summary>
-    public const int BlockSize = 4 << 20;
+    public const int BlockSize = 1 << 20;
 
     private const int Largest = 3;
 
@@ -77,7 +77,7 @@ internal sealed class BlockCsvReducer
     {
         using SafeFileHandle handle = File.OpenHandle(path, FileMode.Open, FileAccess.Read, FileShare.Read, FileOptions.SequentialScan);
         long fileLength = RandomAccess.GetLength(handle);
-        int blockSize = _options.CsvBlockSize ?? Math.Max(BlockSize, (2 * _options.MaxLineLength) + 16);
+        int blockSize = _options.CsvBlockSize ?? BlockSize;
         (Layout layout, long dataStart) = ReadHeader(handle, fileLength, blockSize, expected);
         string idPrefix = layout.Name == CsvLayouts.TriangleRows ? meshId : pointPrefix;
         var plan = new BlockPlan(handle, fileLength, dataStart, blockSize, layout, idPrefix, direction);

@@ -78,6 +78,10 @@ internal static class PlainRowScanner
         {
             return -1;
         }
+        ref int fieldValue = ref MemoryMarshal.GetArrayDataReference(valueOfField);
+        ref double digit = ref MemoryMarshal.GetReference(digits);
+        ref double scale = ref MemoryMarshal.GetReference(scales);
+        int columns = Math.Min(digits.Length, scales.Length);
         int last = Unsafe.Add(ref line, lineEnd - 1) == (byte)'\r' ? lineEnd - 1 : lineEnd;
         int start = 0;
         for (int f = 0; f < fields; f++)
@@ -97,15 +101,16 @@ internal static class PlainRowScanner
                 end = 64 + BitOperations.TrailingZeroCount(high);
                 high &= high - 1;
             }
-            int k = valueOfField[f];
+            int k = Unsafe.Add(ref fieldValue, f);
             if (k >= 0)
             {
-                if (!TryNumber(ref Unsafe.Add(ref line, start), end - start, out double m, out double scale))
+                int at = (k * stride) + slot;
+                if ((uint)at >= (uint)columns || !TryNumber(ref Unsafe.Add(ref line, start), end - start, out double m, out double power))
                 {
                     return -1;
                 }
-                digits[(k * stride) + slot] = m;
-                scales[(k * stride) + slot] = scale;
+                Unsafe.Add(ref digit, at) = m;
+                Unsafe.Add(ref scale, at) = power;
             }
             start = end + 1;
         }
@@ -153,7 +158,8 @@ internal static class PlainRowScanner
         uint digits = Vector128.LessThan(v - Vector128.Create((byte)'0'), Vector128.Create((byte)10)).ExtractMostSignificantBits();
         uint dots = Vector128.Equals(v, Vector128.Create((byte)'.')).ExtractMostSignificantBits();
         byte first = s;
-        int sign = first == (byte)'-' || first == (byte)'+' ? 1 : 0;
+        int minus = Unsafe.BitCast<bool, byte>(first == (byte)'-');
+        int sign = minus | Unsafe.BitCast<bool, byte>(first == (byte)'+');
         uint body = ((1u << length) - 1) & ~(uint)sign;
         dots &= body;
         // every character of the body a digit but at most one point, and at least one digit
@@ -171,8 +177,9 @@ internal static class PlainRowScanner
         {
             return false;
         }
-        value = first == (byte)'-' ? -(double)(long)mantissa : (long)mantissa;
-        scale = Powers[fraction];
+        // the sign bit set without a branch: the signs of a force column are as often one as the other
+        value = BitConverter.Int64BitsToDouble(BitConverter.DoubleToInt64Bits((long)mantissa) | ((long)minus << 63));
+        scale = Unsafe.Add(ref MemoryMarshal.GetArrayDataReference(Powers), fraction); // fraction ≤ 15 here
         return true;
     }
 
@@ -192,7 +199,8 @@ internal static class PlainRowScanner
         Vector128<int> fours = Sse2.MultiplyAddAdjacent(pairs, Vector128.Create((short)100, 1, 100, 1, 100, 1, 100, 1));
         Vector128<ushort> packed = Sse41.PackUnsignedSaturate(fours, fours);
         Vector128<int> eights = Sse2.MultiplyAddAdjacent(packed.AsInt16(), Vector128.Create((short)10000, 1, 10000, 1, 10000, 1, 10000, 1));
-        return ((ulong)(uint)eights.GetElement(0) * 100_000_000UL) + (uint)eights.GetElement(1);
+        ulong both = eights.AsUInt64().ToScalar();
+        return ((both & 0xFFFFFFFFUL) * 100_000_000UL) + (both >> 32);
     }
 
     // The value of n ≤ 16 decimal digits at s.
