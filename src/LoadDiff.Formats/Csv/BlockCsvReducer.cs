@@ -11,15 +11,17 @@ using LoadDiff.Formats.Diagnostics;
 namespace LoadDiff.Formats.Csv;
 
 /// <summary>
-/// Reduces large point-load and triangle-row CSV files without building items: the file is cut into
-/// blocks of whole lines (fixed size, so the cut does not depend on the thread count), the blocks of a
-/// batch are parsed on all cores into one accumulator each, and the accumulators are merged in file
-/// order. Results are therefore identical whether one thread or many parse. Memory is a few blocks.
+/// Reduces large point-load and triangle-row CSV files without building items: the data are cut into fixed
+/// byte ranges (so the cut does not depend on the thread count); each block owns the lines that start in its
+/// range, reads them with its own positioned read, parses them into one accumulator, and the accumulators are
+/// merged in file order. Results are therefore identical whether one thread or many parse. Memory is one
+/// buffer per worker.
 /// </summary>
 /// <remarks>
 /// The splitter is written here rather than taken from a CSV library because it must report the
 /// exact line and column of every error, never pad a short row, and cut blocks deterministically;
-/// numbers are parsed with csFastFloat and checked to consume the whole field.
+/// the common line is read by <see cref="PlainRowScanner"/>, every other one field by field with
+/// csFastFloat, checked to consume the whole field.
 /// </remarks>
 internal sealed class BlockCsvReducer
 {
