@@ -231,3 +231,29 @@ public partial class BlockCsvReducerTests
         }
     }
 }
+
+public partial class BlockCsvReducerTests
+{
+    [Fact]
+    public void The_first_error_in_file_order_is_named_even_when_a_later_line_is_not_utf8()
+    {
+        // Line 2 has a field too many; line 3 holds a byte that is not UTF-8. Whatever the cut, line 2 is reported.
+        using var t = new TempFolder();
+        byte[] head = Encoding.UTF8.GetBytes("id,x,y,z,fx,fy,fz\na,0,0,0,0,0,-1,9\nb,0,0,0,0,0,-");
+        byte[] tail = Encoding.UTF8.GetBytes("1\nc,0,0,0,0,0,-1\n");
+        string path = Path.Combine(t.Path, "deck.csv");
+        File.WriteAllBytes(path, [.. head, 0xFF, .. tail]);
+        foreach (int? blockSize in new int?[] { null, 16, 3 })
+        {
+            ReadResult r = LoadFileReader.Read(path, new ReductionSink(), new ReadOptions { Threads = 2, CsvBlockSize = blockSize });
+            Assert.Equal("LD061", r.Error!.Code);
+            Assert.Equal(2, r.Error.Location.Line);
+        }
+        // with line 2 mended, the invalid byte is named at its line and column
+        File.WriteAllBytes(path, [.. Encoding.UTF8.GetBytes("id,x,y,z,fx,fy,fz\na,0,0,0,0,0,-1\nb,0,0,0,0,0,-"), 0xFF, .. tail]);
+        ReadResult bad = LoadFileReader.Read(path, new ReductionSink());
+        Assert.Equal("LD003", bad.Error!.Code);
+        Assert.Equal(3, bad.Error.Location.Line);
+        Assert.Equal("b,0,0,0,0,0,-".Length + 1, bad.Error.Location.Column);
+    }
+}

@@ -139,17 +139,19 @@ internal sealed class BlockCsvReducer
         int next = -1, stopAfter = int.MaxValue;
         void Work()
         {
-            var worker = new BlockWorker(this, plan);
+            BlockWorker? worker = null;
             int k;
             while ((k = Interlocked.Increment(ref next)) < count && k <= Volatile.Read(ref stopAfter))
             {
                 BlockResult r;
                 try
                 {
+                    worker ??= new BlockWorker(this, plan);
                     r = worker.Parse(k);
                 }
-                catch (Exception e) when (e is not OutOfMemoryException)
+                catch (Exception e)
                 {
+                    // every failure, out of memory included, goes to the merging thread, which waits for this block
                     r = BlockResult.Failed(System.Runtime.ExceptionServices.ExceptionDispatchInfo.Capture(e));
                 }
                 if (r.Error is not null || r.Failure is not null)
@@ -493,12 +495,13 @@ internal sealed class BlockCsvReducer
         int batched = 0;
         BlockResult Error(string code, string message, long atLine, int column) =>
             new() { Error = new BlockError(code, message, atLine, column) };
+        // An invalid byte is reported when its line is reached, so that an error on an earlier line comes first
+        // (as it does when the file is cut at other places).
+        int bad = int.MaxValue, badLineStart = int.MaxValue;
         if (!System.Text.Unicode.Utf8.IsValid(data.AsSpan(begin, length - begin)))
         {
-            int bad = begin + FirstInvalid(data.AsSpan(begin, length - begin));
-            int lineStartOfBad = data.AsSpan(0, bad).LastIndexOf((byte)'\n') + 1;
-            return Error(Codes.InvalidUtf8, $"invalid UTF-8 byte 0x{data[bad]:X2}; CSV files must be UTF-8 text",
-                1 + data.AsSpan(begin, bad - begin).Count((byte)'\n'), Column(data, Math.Max(lineStartOfBad, begin), bad - Math.Max(lineStartOfBad, begin)));
+            bad = begin + FirstInvalid(data.AsSpan(begin, length - begin));
+            badLineStart = Math.Max(begin, data.AsSpan(0, bad).LastIndexOf((byte)'\n') + 1);
         }
         double fl = _units.Length, ff = _units.Force, fm = _units.Moment, fp = _units.Pressure;
         bool triangles = layout.Name == CsvLayouts.TriangleRows;
@@ -559,6 +562,10 @@ internal sealed class BlockCsvReducer
             {
                 line++;
                 int lineStart = pos;
+                if (lineStart >= badLineStart)
+                {
+                    return Error(Codes.InvalidUtf8, $"invalid UTF-8 byte 0x{data[bad]:X2}; CSV files must be UTF-8 text", line, Column(data, lineStart, bad - lineStart));
+                }
                 if (data[pos] == (byte)'\n')
                 {
                     pos++;

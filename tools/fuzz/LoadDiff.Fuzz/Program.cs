@@ -19,8 +19,19 @@ void Csv(byte[] bytes)
 {
     string path = Path.Combine(scratch, "fuzz.csv");
     File.WriteAllBytes(path, bytes);
-    LoadFileReader.Read(path, new ReductionSink(), new ReadOptions { Threads = 1 });
+    var whole = new ReductionSink();
+    ReadResult one = LoadFileReader.Read(path, whole, new ReadOptions { Threads = 1 });
     LoadFileReader.Read(path, new ItemSink(), new ReadOptions { Threads = 1 });
+    // The same file cut into 16-byte blocks on two threads must give the same verdict, position and count.
+    var cut = new ReductionSink();
+    ReadResult small = LoadFileReader.Read(path, cut, new ReadOptions { Threads = 2, CsvBlockSize = 16 });
+    string Outcome(ReadResult r, ReductionSink sink) => r.Succeeded
+        ? "ok " + string.Join(";", sink.Cases.Select(c => c.Key + "=" + c.Value.Count))
+        : $"{r.Error!.Code} {r.Error.Location.Line}:{r.Error.Location.Column}";
+    if (Outcome(one, whole) != Outcome(small, cut))
+    {
+        throw new InvalidOperationException($"block cut changed the outcome: {Outcome(one, whole)} against {Outcome(small, cut)}");
+    }
 }
 
 switch (mode)
