@@ -122,6 +122,21 @@ public partial class BlockCsvReducerTests
     public void Scanner_declinesWhatItCannotReadExactly(string line) => Assert.Null(Scan(line, 4, 1, 2, 3));
 
     [Fact]
+    public void Scanner_readsLongLinesWithFieldsInEveryMask()
+    {
+        // 15 numbers of 15 characters: 239 bytes, so the commas fall in all four 64-byte masks
+        string[] texts = Enumerable.Range(0, 15).Select(i => (i % 2 == 0 ? "-" : "") + (1234567 + i).ToString(CultureInfo.InvariantCulture) + ".89123" + (i % 10).ToString(CultureInfo.InvariantCulture)).ToArray();
+        string line = string.Join(",", texts);
+        Assert.InRange(line.Length, 193, PlainRowScanner.LongestLine - 1);
+        double[]? v = Scan(line, 15, Enumerable.Range(0, 15).ToArray());
+        Assert.NotNull(v);
+        for (int k = 0; k < 15; k++)
+        {
+            Assert.Equal(double.Parse(texts[k], CultureInfo.InvariantCulture), v[k]);
+        }
+    }
+
+    [Fact]
     public void Scanner_declinesLinesLongerThanItReads()
     {
         string id = new('n', PlainRowScanner.LongestLine);
