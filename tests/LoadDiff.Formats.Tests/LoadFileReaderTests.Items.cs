@@ -153,6 +153,34 @@ public sealed partial class LoadFileReaderTests
     }
 
     [Fact]
+    public void Read_indexed_mesh_into_a_reducing_sink_gives_the_closed_form_resultant_and_one_contributor()
+    {
+        // The two triangles above, reduced as they are read. For a linear pressure over a triangle,
+        // ∫p dA = A·Σp_i/3 and ∫p x dA = A/12·(Σp_i·Σx_i + Σp_i·x_i) (from ∫φ_iφ_j dA = A(1+δ_ij)/12, the
+        // linear-triangle mass matrix of finite-element texts): ∫p = 2·0.75 + 2·1 = 3.5, ∫p x = 1 + 8/3 = 11/3,
+        // ∫p y = 13/12 + 11/4 = 23/6. With the force along −z: R = (0, 0, −3.5), M_O = (−∫p y, ∫p x, 0).
+        _folder.Write("v.csv", "id,x,y,z,p\nn1,0,0,0,0.5\nn2,2,0,0,0.75\nn3,0,2,0,1\nn4,2,2,0,1.25\n");
+        _folder.Write("t.csv", "a,b,c\nn1,n2,n3\nn2,n4,n3\n");
+        string path = _folder.Write("mesh.loads.json", """
+            { "cases": { "wind": { "loads": [
+                { "id": "map", "kind": "mesh", "vertices": "v.csv", "triangles": "t.csv", "direction": [0, 0, -1] } ] } } }
+            """);
+        var sink = new LoadDiff.Core.Model.ReductionSink(topContributors: 3);
+        Assert.True(LoadFileReader.Read(path, sink).Succeeded);
+        LoadDiff.Core.Reduction.LoadReduction r = sink.Cases["wind"].ResultAt(LoadDiff.Core.Vector3.Zero);
+        Assert.Equal(2, r.ItemCount);
+        Assert.Equal(0, r.Force.X);
+        Assert.Equal(0, r.Force.Y);
+        Assert.Equal(-3.5, r.Force.Z, 1e-14);
+        Assert.Equal(-23.0 / 6, r.Moment.X, 1e-14);
+        Assert.Equal(11.0 / 3, r.Moment.Y, 1e-14);
+        Assert.Equal(0, r.Moment.Z, 1e-14);
+        var mesh = Assert.Single(sink.Contributors("wind")!.Forces);
+        Assert.Equal("map", mesh.Id);
+        Assert.Equal(2, mesh.Parts);
+    }
+
+    [Fact]
     public void Read_forces_csv_prefixes_ids_numbers_rows_without_id_and_adds_nonzero_couples()
     {
         _folder.Write("sub/wheels.csv", "id,x,y,z,fx,fy,fz,mx,my,mz\nw1,0,0,0,0,0,-85,0,0,0\nw2,2.4,0,0,0,1.5e1,-85,0,12,0\n");

@@ -1,5 +1,7 @@
 using LoadDiff.Core;
 using LoadDiff.Core.Loads;
+using LoadDiff.Core.Model;
+using LoadDiff.Core.Reduction;
 using LoadDiff.Formats.Diagnostics;
 
 namespace LoadDiff.Formats.Csv;
@@ -87,8 +89,13 @@ internal sealed class CsvLoadReader
         ReadTriangleRowsBody(csv, id, direction);
     });
 
-    public void ReadIndexedMesh(CsvRowReader vertices, CsvRowReader triangles, string id, Vector3? direction)
+    /// <summary>
+    /// Reads a vertex table and a triangle table. With <paramref name="bulk"/> the triangles are reduced as they are
+    /// read (no item per triangle) and handed over as one block, the mesh as its one contributor.
+    /// </summary>
+    public void ReadIndexedMesh(CsvRowReader vertices, CsvRowReader triangles, string id, Vector3? direction, IReducedBlockSink? bulk = null)
     {
+        ReductionAccumulator? reduced = bulk is null ? null : new ReductionAccumulator();
         var table = new Dictionary<string, (Vector3 X, double P)>(StringComparer.Ordinal);
         Guarded(vertices, () =>
         {
@@ -122,9 +129,23 @@ internal sealed class CsvLoadReader
                 var a = Vertex(ca);
                 var b = Vertex(cb);
                 var c = Vertex(cc);
-                EmitTriangle(triangles, id, a.X, b.X, c.X, a.P, b.P, c.P, direction);
+                if (reduced is null)
+                {
+                    EmitTriangle(triangles, id, a.X, b.X, c.X, a.P, b.P, c.P, direction);
+                }
+                else
+                {
+                    CheckTriangle(triangles, a.X, b.X, c.X, direction);
+                    Count(triangles);
+                    reduced.AddTriangle(a.X, b.X, c.X, a.P, b.P, c.P, direction);
+                }
             }
         });
+        if (bulk is not null && reduced is { Count: > 0 })
+        {
+            LoadReduction total = reduced.ResultAt(reduced.Anchor ?? Vector3.Zero);
+            bulk.AddReducedBlock(reduced, [new Contributor(id, LoadKind.MeshTriangle, total.Force, Vector3.Zero, total.Centroid, reduced.Count)]);
+        }
     }
 
     private void ReadPointLoadRows(CsvRowReader csv, string idPrefix)
@@ -176,6 +197,14 @@ internal sealed class CsvLoadReader
 
     private void EmitTriangle(CsvRowReader csv, string id, Vector3 a, Vector3 b, Vector3 c, double pa, double pb, double pc, Vector3? direction)
     {
+        CheckTriangle(csv, a, b, c, direction);
+        Count(csv);
+        _emit(new MeshTriangle(id, a, b, c, pa, pb, pc, direction));
+    }
+
+    // Without a given direction the force follows the normal, which a triangle without area does not have.
+    private static void CheckTriangle(CsvRowReader csv, Vector3 a, Vector3 b, Vector3 c, Vector3? direction)
+    {
         if (direction is null)
         {
             Vector3 n = Vector3.Cross(b - a, c - a);
@@ -185,8 +214,6 @@ internal sealed class CsvLoadReader
                 throw csv.Fail(Codes.DegenerateTriangle, "the triangle has no area, so its normal is undefined", 0);
             }
         }
-        Count(csv);
-        _emit(new MeshTriangle(id, a, b, c, pa, pb, pc, direction));
     }
 
     private Vector3 Point(CsvRowReader csv, int cx, int cy, int cz) =>

@@ -318,7 +318,7 @@ internal sealed class LoadJsonWalker
                     JsonNode v = item["vertices"] ?? throw Error(item, path, Codes.MissingField,
                         "a mesh needs 'file' (one row per triangle) or 'vertices' and 'triangles' (two tables)");
                     JsonNode tr = Required(item, "triangles", path);
-                    csv.ReadIndexedMesh(OpenReferenced(v, path + ".vertices"), OpenReferenced(tr, path + ".triangles"), meshId, dir);
+                    csv.ReadIndexedMesh(OpenReferenced(v, path + ".vertices"), OpenReferenced(tr, path + ".triangles"), meshId, dir, sink as IReducedBlockSink);
                 }
                 break;
             }
