@@ -80,7 +80,7 @@ internal sealed class BlockCsvReducer
         using SafeFileHandle handle = File.OpenHandle(path, FileMode.Open, FileAccess.Read, FileShare.Read, FileOptions.SequentialScan);
         long fileLength = RandomAccess.GetLength(handle);
         int blockSize = _options.CsvBlockSize ?? BlockSize;
-        (Layout layout, long dataStart) = ReadHeader(handle, fileLength, blockSize, expected);
+        (Layout layout, long dataStart) = ReadHeader(handle, fileLength, expected);
         string idPrefix = layout.Name == CsvLayouts.TriangleRows ? meshId : pointPrefix;
         var plan = new BlockPlan(handle, fileLength, dataStart, blockSize, layout, idPrefix, direction);
         int count = (int)((fileLength - dataStart + blockSize - 1) / blockSize);
@@ -198,7 +198,7 @@ internal sealed class BlockCsvReducer
         }
     }
 
-    private (Layout Layout, long DataStart) ReadHeader(SafeFileHandle handle, long fileLength, int blockSize, string? expected)
+    private (Layout Layout, long DataStart) ReadHeader(SafeFileHandle handle, long fileLength, string? expected)
     {
         byte[] head = new byte[(int)Math.Min(fileLength, (long)_options.MaxLineLength + 2)];
         int got = ReadAt(handle, 0, head, 0, head.Length);
