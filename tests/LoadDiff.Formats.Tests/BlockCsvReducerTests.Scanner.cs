@@ -272,3 +272,38 @@ public partial class BlockCsvReducerTests
         Assert.Equal("b,0,0,0,0,0,-".Length + 1, bad.Error.Location.Column);
     }
 }
+
+public partial class BlockCsvReducerTests
+{
+    [Fact]
+    public void Item_path_reads_every_number_as_the_runtime_parser_does()
+    {
+        // The item reader (used when items are needed, for example by a report's sketch) takes a fast path for plain
+        // decimals; whatever the text, it must agree with double.TryParse under the same rules (a general-purpose
+        // reference): same bits when accepted, an error when the runtime parser refuses the text.
+        using var t = new TempFolder();
+        string path = Path.Combine(t.Path, "one.csv");
+        Gen.Select(NumberText, Gen.Int[0, 5]).Sample((text, column) =>
+        {
+            string[] row = ["0", "0", "0", "0", "0", "1"];
+            row[column] = text;
+            lock (Gate)
+            {
+                File.WriteAllText(path, "x,y,z,fx,fy,fz\n" + string.Join(",", row) + "\n");
+                var sink = new CollectingSink();
+                ReadResult r = LoadFileReader.Read(path, sink);
+                bool parses = double.TryParse(text.Trim(), NumberStyles.AllowLeadingSign | NumberStyles.AllowDecimalPoint | NumberStyles.AllowExponent,
+                    CultureInfo.InvariantCulture, out double reference) && Math.Abs(reference) <= 1e100;
+                Assert.Equal(parses, r.Succeeded);
+                if (parses)
+                {
+                    var force = Assert.IsType<PointForce>(Assert.Single(sink.Case("one").Items));
+                    double read = column < 3 ? force.At[column] : force.Value[column - 3];
+                    Assert.Equal(BitConverter.DoubleToInt64Bits(reference), BitConverter.DoubleToInt64Bits(read));
+                }
+            }
+        }, iter: 3000);
+    }
+
+    private static readonly object Gate = new();
+}

@@ -93,6 +93,10 @@ internal sealed class CsvRowReader : IDisposable
     public double Number(int column)
     {
         string s = _fields[column].Trim();
+        if (TryDecimal(s, out double fast))
+        {
+            return fast; // a plain decimal of at most 15 digits: exact, finite and far below the limit
+        }
         if (!double.TryParse(s, NumberStyles.AllowLeadingSign | NumberStyles.AllowDecimalPoint | NumberStyles.AllowExponent,
                 CultureInfo.InvariantCulture, out double v))
         {
@@ -113,6 +117,28 @@ internal sealed class CsvRowReader : IDisposable
     }
 
     public string Text(int column) => _fields[column].Trim();
+
+    // Clinger's fast path on the ASCII text (the same correctly rounded value double.TryParse gives), with no
+    // exponent so that the value stays within the accepted magnitude; anything else goes to the runtime parser.
+    private static bool TryDecimal(string s, out double value)
+    {
+        value = 0;
+        if (s.Length is 0 or > 24)
+        {
+            return false;
+        }
+        Span<byte> ascii = stackalloc byte[s.Length];
+        for (int i = 0; i < s.Length; i++)
+        {
+            char c = s[i];
+            if (c is 'e' or 'E' or > '\u007f')
+            {
+                return false;
+            }
+            ascii[i] = (byte)c;
+        }
+        return DecimalFastPath.TryParse(ascii, out value);
+    }
 
     public InputError Fail(string code, string message, int? column) =>
         new(new Diagnostic(code, Severity.Error, message, Line == 0
