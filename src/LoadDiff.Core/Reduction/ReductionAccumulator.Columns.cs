@@ -21,6 +21,7 @@ public sealed partial class ReductionAccumulator
     /// <param name="fz">Forces, z.</param>
     /// <param name="magnitudes">Receives |F| of each row, as <see cref="Vector3.Length"/> gives it.</param>
     /// <returns>False, with nothing added, when a term is not finite (the caller then adds the rows one at a time to find it).</returns>
+    [System.Runtime.CompilerServices.MethodImpl(System.Runtime.CompilerServices.MethodImplOptions.AggressiveOptimization)]
     public bool AddPointForces(
         ReadOnlySpan<double> x, ReadOnlySpan<double> y, ReadOnlySpan<double> z,
         ReadOnlySpan<double> fx, ReadOnlySpan<double> fy, ReadOnlySpan<double> fz, Span<double> magnitudes)

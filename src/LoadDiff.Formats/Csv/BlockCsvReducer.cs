@@ -463,6 +463,7 @@ internal sealed class BlockCsvReducer
 
     // into[i] = digits / scale · factor for the rows of column k: the quotient is the correctly rounded value read,
     // the factor the unit conversion (the same two roundings as reading the number and converting it).
+    [System.Runtime.CompilerServices.MethodImpl(System.Runtime.CompilerServices.MethodImplOptions.AggressiveOptimization)]
     private static void Divide(double[] digits, double[] scales, int k, int n, double factor, double[] into)
     {
         ReadOnlySpan<double> d = digits.AsSpan(k * Batch, n), s = scales.AsSpan(k * Batch, n);
@@ -481,6 +482,7 @@ internal sealed class BlockCsvReducer
         }
     }
 
+    [System.Runtime.CompilerServices.MethodImpl(System.Runtime.CompilerServices.MethodImplOptions.AggressiveOptimization)]
     private BlockResult ParseBlock(BlockWorker w, int begin, int length)
     {
         byte[] data = w.Buffer;

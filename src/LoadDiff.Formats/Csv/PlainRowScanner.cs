@@ -47,6 +47,7 @@ internal static class PlainRowScanner
     /// The caller divides, many at a time: the quotient is the correctly rounded value.
     /// </summary>
     /// <returns>The index of the line feed (or carriage return before it) that ends the line, or −1 to decline.</returns>
+    [System.Runtime.CompilerServices.MethodImpl(System.Runtime.CompilerServices.MethodImplOptions.AggressiveOptimization)]
     public static int TryScan(byte[] buffer, int pos, int[] valueOfField, Span<double> digits, Span<double> scales, int stride, int slot)
     {
         ref byte line = ref Unsafe.Add(ref MemoryMarshal.GetArrayDataReference(buffer), pos);
