@@ -201,10 +201,14 @@ public sealed partial class ReductionAccumulator
             MaxX = Vector256.Max(MaxX, px);
             MaxY = Vector256.Max(MaxY, py);
             MaxZ = Vector256.Max(MaxZ, pz);
-            // |F × u|² ≤ tol²|F|² for every force (zero forces pass), as LoadItem.Parallel tests it
-            Vector256<double> cx = (gy * _uz) - (gz * _uy), cy = (gz * _ux) - (gx * _uz), cz = (gx * _uy) - (gy * _ux);
-            Vector256<double> cross = (cx * cx) + (cy * cy) + (cz * cz);
-            _notParallel |= Vector256.GreaterThan(cross, Vector256.Create(ParallelTolerance * ParallelTolerance) * sq);
+            // |F × u|² ≤ tol²|F|² for every force (zero forces pass), as LoadItem.Parallel tests it; once one force
+            // is not parallel the answer is known and the test is skipped
+            if (_notParallel == Vector256<double>.Zero)
+            {
+                Vector256<double> cx = (gy * _uz) - (gz * _uy), cy = (gz * _ux) - (gx * _uz), cz = (gx * _uy) - (gy * _ux);
+                Vector256<double> cross = (cx * cx) + (cy * cy) + (cz * cz);
+                _notParallel |= Vector256.GreaterThan(cross, Vector256.Create(ParallelTolerance * ParallelTolerance) * sq);
+            }
         }
 
         public readonly bool AllFinite() =>

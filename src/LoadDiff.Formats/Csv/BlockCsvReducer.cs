@@ -495,6 +495,7 @@ internal sealed class BlockCsvReducer
         long items = 0;
         int pos = begin;
         int batched = 0;
+        double threshold = double.NegativeInfinity; // the smallest magnitude kept, once the list is full
         BlockResult Error(string code, string message, long atLine, int column) =>
             new() { Error = new BlockError(code, message, atLine, column) };
         // An invalid byte is reported when its line is reached, so that an error on an earlier line comes first
@@ -540,10 +541,11 @@ internal sealed class BlockCsvReducer
                     }
                 }
             }
+            double[] magnitudes = w.Magnitude;
             for (int i = 0; i < n; i++)
             {
-                double mag = w.Magnitude[i];
-                if (largest.Count < Largest || mag > largest[^1].Magnitude)
+                double mag = magnitudes[i];
+                if (mag > threshold || largest.Count < Largest)
                 {
                     ReadOnlySpan<byte> row = data.AsSpan(w.RowStart[i], w.RowEnd[i] - w.RowStart[i]);
                     string? id = null;
@@ -553,6 +555,7 @@ internal sealed class BlockCsvReducer
                         id = Encoding.UTF8.GetString(row[starts[layout.Id]..ends[layout.Id]]).Trim().Trim('"');
                     }
                     Keep(largest, new LargestRow(id, w.RowLine[i], Vector3.Create(w.Fx[i], w.Fy[i], w.Fz[i]), Vector3.Create(w.X[i], w.Y[i], w.Z[i]), mag));
+                    threshold = largest.Count < Largest ? double.NegativeInfinity : largest[^1].Magnitude;
                 }
             }
             return null;
