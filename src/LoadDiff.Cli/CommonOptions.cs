@@ -60,6 +60,18 @@ public static class CommonOptions
         double.TryParse(s.Trim(), NumberStyles.AllowLeadingSign | NumberStyles.AllowDecimalPoint | NumberStyles.AllowExponent,
             CultureInfo.InvariantCulture, out value) && double.IsFinite(value);
 
+    /// <summary>The option's value as a finite number ≥ 0, or null with an error naming the option.</summary>
+    public static double? ParseNonNegative(ArgumentResult r, string name)
+    {
+        string s = r.Tokens.Count > 0 ? r.Tokens[0].Value : "";
+        if (TryParseFinite(s, out double v) && v >= 0)
+        {
+            return v;
+        }
+        r.AddError($"{name} '{s}': expected a finite number ≥ 0 with a point as decimal separator");
+        return null;
+    }
+
     private static ReferenceChoice? ParseAt(ArgumentResult r)
     {
         string s = r.Tokens.Count > 0 ? r.Tokens[0].Value : "";

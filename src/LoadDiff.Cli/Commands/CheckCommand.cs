@@ -151,15 +151,6 @@ public static class CheckCommand
         Description = description,
         DefaultValueFactory = _ => fallback,
         HelpName = "NUMBER",
-        CustomParser = r =>
-        {
-            string s = r.Tokens.Count > 0 ? r.Tokens[0].Value : "";
-            if (CommonOptions.TryParseFinite(s, out double v) && v >= 0)
-            {
-                return v;
-            }
-            r.AddError($"{name} '{s}': expected a finite number ≥ 0 with a point as decimal separator");
-            return fallback;
-        },
+        CustomParser = r => CommonOptions.ParseNonNegative(r, name) ?? fallback,
     };
 }

@@ -26,16 +26,7 @@ public sealed class SectionGate
         Description = "Allowed largest cut-side moment deviation as a fraction of the original's peak cut moment, for --sections "
             + "(no default: no published figure exists, choose it for the member at hand).",
         HelpName = "REL",
-        CustomParser = r =>
-        {
-            string s = r.Tokens.Count > 0 ? r.Tokens[0].Value : "";
-            if (CommonOptions.TryParseFinite(s, out double v) && v >= 0)
-            {
-                return v;
-            }
-            r.AddError($"--section-tol '{s}': expected a finite number ≥ 0 with a point as decimal separator");
-            return null;
-        },
+        CustomParser = r => CommonOptions.ParseNonNegative(r, "--section-tol"),
     };
 
     /// <summary>Rejects inconsistent gate options before anything is written.</summary>
