@@ -110,14 +110,12 @@ public static class LoadFileReader
         {
             long offset = e.ReaderLine is { } rl ? lines.OffsetOf(rl, e.ReaderBytePosition) : e.Offset;
             var (l, c) = lines.Locate(offset);
-            throw e.TooDeep ? Fail(Codes.TooDeep, $"JSON nesting deeper than {options.MaxDepth} levels (raise the limit with --max-depth)", file, l, c)
-                : e.InvalidText ? Fail(Codes.InvalidUtf8, e.Message, file, l, c)
-                : Fail(Codes.MalformedJson, "malformed JSON: " + e.Message, file, l, c);
+            throw SyntaxFailure(e, options, file, l, c);
         }
         catch (JsonDuplicateKey e)
         {
             var (l, c) = lines.Locate(e.Offset);
-            throw Fail(Codes.DuplicateKey, $"key '{e.Key}' appears twice in the same object", file, l, c);
+            throw DuplicateKeyFailure(e, file, l, c);
         }
         catch (InvalidOperationException)
         {
@@ -174,14 +172,12 @@ public static class LoadFileReader
             {
                 c = ColumnOf(path, skip, rl: l - 1, e.ReaderBytePosition);
             }
-            throw e.TooDeep ? Fail(Codes.TooDeep, $"JSON nesting deeper than {options.MaxDepth} levels (raise the limit with --max-depth)", path, l, c)
-                : e.InvalidText ? Fail(Codes.InvalidUtf8, e.Message, path, l, c)
-                : Fail(Codes.MalformedJson, "malformed JSON: " + e.Message, path, l, c);
+            throw SyntaxFailure(e, options, path, l, c);
         }
         catch (JsonDuplicateKey e)
         {
             var (l, c) = lines.Locate(e.Offset);
-            throw Fail(Codes.DuplicateKey, $"key '{e.Key}' appears twice in the same object", path, l, c);
+            throw DuplicateKeyFailure(e, path, l, c);
         }
     }
 
@@ -274,6 +270,15 @@ public static class LoadFileReader
         }
         return ms.ToArray();
     }
+
+    // The diagnostics of the JSON token reader's errors, the same for a file read whole and one streamed.
+    private static InputError SyntaxFailure(JsonSyntaxError e, ReadOptions options, string file, int line, int column) =>
+        e.TooDeep ? Fail(Codes.TooDeep, $"JSON nesting deeper than {options.MaxDepth} levels (raise the limit with --max-depth)", file, line, column)
+        : e.InvalidText ? Fail(Codes.InvalidUtf8, e.Message, file, line, column)
+        : Fail(Codes.MalformedJson, "malformed JSON: " + e.Message, file, line, column);
+
+    private static InputError DuplicateKeyFailure(JsonDuplicateKey e, string file, int line, int column) =>
+        Fail(Codes.DuplicateKey, $"key '{e.Key}' appears twice in the same object", file, line, column);
 
     private static InputError Fail(string code, string message, string file, int? line = null, int? column = null) =>
         new(new Diagnostic(code, Severity.Error, message, new SourceLocation(file, line, column)));
