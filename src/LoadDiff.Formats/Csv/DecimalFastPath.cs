@@ -30,38 +30,24 @@ internal static class DecimalFastPath
             i++;
         }
         long mantissa = 0;
-        int digits = 0, scale = 0;
-        bool any = false;
-        while (i < s.Length && (uint)(s[i] - '0') <= 9)
+        int digits = 0;
+        int start = i;
+        if (!TakeDigits(s, ref i, ref mantissa, ref digits))
         {
-            any = true;
-            if (mantissa != 0 || s[i] != (byte)'0')
-            {
-                if (++digits > 15)
-                {
-                    return false;
-                }
-                mantissa = (mantissa * 10) + (s[i] - '0');
-            }
-            i++;
+            return false;
         }
+        bool any = i > start;
+        int scale = 0;
         if (i < s.Length && s[i] == (byte)'.')
         {
             i++;
-            while (i < s.Length && (uint)(s[i] - '0') <= 9)
+            int fractionStart = i;
+            if (!TakeDigits(s, ref i, ref mantissa, ref digits))
             {
-                any = true;
-                if (mantissa != 0 || s[i] != (byte)'0')
-                {
-                    if (++digits > 15)
-                    {
-                        return false;
-                    }
-                    mantissa = (mantissa * 10) + (s[i] - '0');
-                }
-                scale--;
-                i++;
+                return false;
             }
+            scale = fractionStart - i;
+            any |= i > fractionStart;
         }
         if (!any)
         {
@@ -102,6 +88,24 @@ internal static class DecimalFastPath
         if (negative)
         {
             value = -value;
+        }
+        return true;
+    }
+
+    // Appends the digits at i to the mantissa (leading zeros do not count as significant); false past 15 significant digits.
+    private static bool TakeDigits(ReadOnlySpan<byte> s, ref int i, ref long mantissa, ref int digits)
+    {
+        while (i < s.Length && (uint)(s[i] - '0') <= 9)
+        {
+            if (mantissa != 0 || s[i] != (byte)'0')
+            {
+                if (++digits > 15)
+                {
+                    return false;
+                }
+                mantissa = (mantissa * 10) + (s[i] - '0');
+            }
+            i++;
         }
         return true;
     }
