@@ -1,6 +1,8 @@
-namespace LoadDiff.Cli.Tests.Support;
+using System.Text;
 
-/// <summary>A fresh folder on disk, removed when disposed.</summary>
+namespace LoadDiff.Tests.Support;
+
+/// <summary>A fresh folder on disk for test files, removed when disposed (compiled into each test project that needs one).</summary>
 public sealed class TempFolder : IDisposable
 {
     public TempFolder()
@@ -11,17 +13,13 @@ public sealed class TempFolder : IDisposable
 
     public string Path { get; }
 
-    public string Write(string name, string content)
-    {
-        string full = System.IO.Path.Combine(Path, name);
-        Directory.CreateDirectory(System.IO.Path.GetDirectoryName(full)!);
-        File.WriteAllText(full, content);
-        return full;
-    }
+    /// <summary>Writes UTF-8 text without a byte-order mark.</summary>
+    public string Write(string name, string content) => WriteBytes(name, new UTF8Encoding(false).GetBytes(content));
 
     public string WriteBytes(string name, byte[] content)
     {
         string full = System.IO.Path.Combine(Path, name);
+        Directory.CreateDirectory(System.IO.Path.GetDirectoryName(full)!);
         File.WriteAllBytes(full, content);
         return full;
     }
