@@ -52,47 +52,25 @@ internal static class PlainRowScanner
     {
         ref byte line = ref Unsafe.Add(ref MemoryMarshal.GetArrayDataReference(buffer), pos);
         // commas of the line, 64 bytes a mask; the line feed ends the line within the first 256 bytes or it is declined
-        ulong m1 = 0, m2 = 0, m3 = 0;
-        Classify(ref line, 0, out ulong m0, out ulong feeds, out bool quote);
-        int lineEnd;
-        if (feeds != 0)
+        CommaMasks masks = default;
+        int lineEnd = -1;
+        bool quote = false;
+        for (int chunk = 0; chunk < LongestLine / 64; chunk++)
         {
-            lineEnd = BitOperations.TrailingZeroCount(feeds);
-            m0 &= (1UL << lineEnd) - 1;
-        }
-        else
-        {
-            Classify(ref line, 64, out m1, out feeds, out bool quote1);
-            quote |= quote1;
+            Classify(ref line, 64 * chunk, out ulong chunkCommas, out ulong feeds, out bool chunkQuote);
+            quote |= chunkQuote;
             if (feeds != 0)
             {
-                lineEnd = 64 + BitOperations.TrailingZeroCount(feeds);
-                m1 &= (1UL << (lineEnd - 64)) - 1;
+                int at = BitOperations.TrailingZeroCount(feeds);
+                masks[chunk] = chunkCommas & ((1UL << at) - 1);
+                lineEnd = (64 * chunk) + at;
+                break;
             }
-            else
-            {
-                Classify(ref line, 128, out m2, out feeds, out quote1);
-                quote |= quote1;
-                if (feeds != 0)
-                {
-                    lineEnd = 128 + BitOperations.TrailingZeroCount(feeds);
-                    m2 &= (1UL << (lineEnd - 128)) - 1;
-                }
-                else
-                {
-                    Classify(ref line, 192, out m3, out feeds, out quote1);
-                    quote |= quote1;
-                    if (feeds == 0)
-                    {
-                        return -1;
-                    }
-                    lineEnd = 192 + BitOperations.TrailingZeroCount(feeds);
-                    m3 &= (1UL << (lineEnd - 192)) - 1;
-                }
-            }
+            masks[chunk] = chunkCommas;
         }
         int fields = valueOfField.Length;
-        if (quote || BitOperations.PopCount(m0) + BitOperations.PopCount(m1) + BitOperations.PopCount(m2) + BitOperations.PopCount(m3) != fields - 1)
+        if (lineEnd < 0 || quote
+            || BitOperations.PopCount(masks[0]) + BitOperations.PopCount(masks[1]) + BitOperations.PopCount(masks[2]) + BitOperations.PopCount(masks[3]) != fields - 1)
         {
             return -1;
         }
@@ -102,7 +80,7 @@ internal static class PlainRowScanner
         int columns = Math.Min(digits.Length, scales.Length);
         int last = Unsafe.Add(ref line, lineEnd - 1) == (byte)'\r' ? lineEnd - 1 : lineEnd;
         int start = 0;
-        ulong commas = m0;
+        ulong commas = masks[0];
         int offset = 0;
         for (int f = 0; f < fields; f++)
         {
@@ -117,7 +95,7 @@ internal static class PlainRowScanner
                 while (commas == 0)
                 {
                     offset += 64;
-                    commas = offset == 64 ? m1 : offset == 128 ? m2 : m3;
+                    commas = masks[offset / 64];
                 }
                 end = offset + BitOperations.TrailingZeroCount(commas);
                 commas &= commas - 1;
@@ -136,6 +114,13 @@ internal static class PlainRowScanner
             start = end + 1;
         }
         return pos + last;
+    }
+
+    /// <summary>The comma masks of a line, one per 64 bytes.</summary>
+    [InlineArray(LongestLine / 64)]
+    private struct CommaMasks
+    {
+        private ulong _first;
     }
 
     // Bit masks of the commas and line feeds among 64 bytes at offset, and whether a quote is among them.
