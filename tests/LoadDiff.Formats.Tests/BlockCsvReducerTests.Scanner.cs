@@ -167,7 +167,8 @@ public partial class BlockCsvReducerTests
     public void Every_block_size_gives_the_items_of_the_item_path_and_the_same_bits_on_one_and_two_threads()
     {
         using var t = new TempFolder();
-        string path = t.Write("deck.csv", MixedCsv(400, 17));
+        string csv = MixedCsv(400, 17);
+        string path = t.Write("deck.csv", csv);
         var items = new CollectingSink();
         Assert.True(LoadFileReader.Read(path, items).Succeeded);
         var one = new ReductionAccumulator();
@@ -177,6 +178,7 @@ public partial class BlockCsvReducerTests
         }
         Vector3 p = Vector3.Create(50, 5, 0);
         LoadReduction expected = one.ResultAt(p);
+        (decimal[] exactForce, decimal[] exactMoment) = DecimalReduction(csv, 50, 5, 0);
         string[] top = items.Case("deck").Items.OfType<PointForce>().OrderByDescending(f => f.Value.Length).Take(3).Select(f => f.Id).ToArray();
 
         // Block sizes from a few bytes (most blocks then hold no line start at all) to more than the file.
@@ -196,9 +198,41 @@ public partial class BlockCsvReducerTests
             Assert.Equal(expected.Bounds, a.Bounds);
             Assert.True((expected.Force - a.Force).Length <= 1e-13 * expected.GrossForce, $"block size {blockSize}");
             Assert.True((expected.Moment - a.Moment).Length <= 1e-13 * expected.MomentScale(p), $"block size {blockSize}");
+            // and against exact decimal arithmetic on the numbers as written (the doubles read differ from them by
+            // half an ulp at most, hence a tolerance far below any engineering one)
+            for (int k = 0; k < 3; k++)
+            {
+                Assert.True(Math.Abs(a.Force[k] - (double)exactForce[k]) <= 1e-13 * a.GrossForce, $"block size {blockSize}, R[{k}]");
+                Assert.True(Math.Abs(a.Moment[k] - (double)exactMoment[k]) <= 1e-13 * a.MomentScale(p), $"block size {blockSize}, M[{k}]");
+            }
             Assert.Equal(top, topA);
             Assert.Equal(top, topB);
         }
+    }
+
+    // R = ΣF and M = Σ (r − P) × F of a point-load CSV in System.Decimal, exact for these short decimal numbers;
+    // the rows are split here independently of the reader (a quoted id is the only quoted field).
+    private static (decimal[] Force, decimal[] Moment) DecimalReduction(string csv, decimal px, decimal py, decimal pz)
+    {
+        decimal[] f = new decimal[3], m = new decimal[3];
+        foreach (string raw in csv.Split('\n').Skip(1))
+        {
+            string line = raw.TrimEnd('\r');
+            if (line.Trim().Length == 0)
+            {
+                continue;
+            }
+            string rest = line.StartsWith('"') ? line[(line.IndexOf('"', 1) + 2)..] : line[(line.IndexOf(',') + 1)..];
+            decimal[] v = rest.Split(',').Select(x => decimal.Parse(x.Trim(), NumberStyles.Float, CultureInfo.InvariantCulture)).ToArray();
+            decimal dx = v[0] - px, dy = v[1] - py, dz = v[2] - pz;
+            f[0] += v[3];
+            f[1] += v[4];
+            f[2] += v[5];
+            m[0] += (dy * v[5]) - (dz * v[4]);
+            m[1] += (dz * v[3]) - (dx * v[5]);
+            m[2] += (dx * v[4]) - (dy * v[3]);
+        }
+        return (f, m);
     }
 
     [Fact]
