@@ -279,10 +279,7 @@ public partial class BlockCsvReducerTests
             Assert.Equal(41, r.Error.Location.Line);
         }
     }
-}
 
-public partial class BlockCsvReducerTests
-{
     [Fact]
     public void The_first_error_in_file_order_is_named_even_when_a_later_line_is_not_utf8()
     {
@@ -305,10 +302,7 @@ public partial class BlockCsvReducerTests
         Assert.Equal(3, bad.Error.Location.Line);
         Assert.Equal("b,0,0,0,0,0,-".Length + 1, bad.Error.Location.Column);
     }
-}
 
-public partial class BlockCsvReducerTests
-{
     [Fact]
     public void Item_path_reads_every_number_as_the_runtime_parser_does()
     {
