@@ -10,6 +10,30 @@ public abstract record LoadItem(string Id)
     /// <summary>The exact (closed-form) contribution of this item to a reduction about <paramref name="point"/>.</summary>
     public abstract Contribution ContributionAbout(Vector3 point);
 
+    /// <summary>
+    /// True when the item's gross magnitude is not zero (Σ|F| or ∫|w| of its forces, or |C| of a couple). An item that is
+    /// not loaded (a zero nodal force of a whole-model export, a line or area of zero intensity) is no loaded geometry:
+    /// it widens no box, no tolerance and no section range.
+    /// </summary>
+    public virtual bool IsLoaded
+    {
+        get
+        {
+            Vector3 origin = Vector3.Zero;
+            bool found = false;
+            VisitGeometry(p =>
+            {
+                if (!found)
+                {
+                    origin = p;
+                    found = true;
+                }
+            });
+            Contribution c = ContributionAbout(origin);
+            return c.GrossForce > 0 || c.GrossCouple > 0;
+        }
+    }
+
     /// <summary>Calls <paramref name="visit"/> for every point that bounds this item's geometry (none for a couple).</summary>
     public abstract void VisitGeometry(Action<Vector3> visit);
 

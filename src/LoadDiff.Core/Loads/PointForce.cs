@@ -18,6 +18,9 @@ public sealed record PointForce(string Id, Vector3 At, Vector3 Value) : LoadItem
     }
 
     /// <inheritdoc/>
+    public override bool IsLoaded => !Value.IsZero;
+
+    /// <inheritdoc/>
     public override void VisitGeometry(Action<Vector3> visit) => Guard.NotNull(visit)(At);
 
     internal override bool IsParallelTo(Vector3 direction, double relativeTolerance) => Parallel(Value, direction, relativeTolerance);
