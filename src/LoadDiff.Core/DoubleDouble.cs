@@ -69,6 +69,20 @@ public readonly struct DoubleDouble : IEquatable<DoubleDouble>
         return QuickTwoSum(p._hi, Math.FusedMultiplyAdd(a._lo, b, p._lo));
     }
 
+    /// <summary>Product of two double-doubles (relative error about 2⁻¹⁰⁴).</summary>
+    public static DoubleDouble Multiply(DoubleDouble a, DoubleDouble b)
+    {
+        DoubleDouble p = TwoProduct(a._hi, b._hi);
+        double lo = Math.FusedMultiplyAdd(a._hi, b._lo, Math.FusedMultiplyAdd(a._lo, b._hi, p._lo));
+        return QuickTwoSum(p._hi, lo);
+    }
+
+    /// <summary>The exact difference a − b as a double-double.</summary>
+    public static DoubleDouble Difference(double a, double b) => TwoSum(a, -b);
+
+    /// <summary>Difference of two double-doubles.</summary>
+    public static DoubleDouble Subtract(DoubleDouble a, DoubleDouble b) => Add(a, Negate(b));
+
     /// <summary>The opposite value.</summary>
     public static DoubleDouble Negate(DoubleDouble a) => new(-a._hi, -a._lo);
 
@@ -80,6 +94,12 @@ public readonly struct DoubleDouble : IEquatable<DoubleDouble>
 
     /// <summary>Product operator.</summary>
     public static DoubleDouble operator *(DoubleDouble a, double b) => Multiply(a, b);
+
+    /// <summary>Product operator.</summary>
+    public static DoubleDouble operator *(DoubleDouble a, DoubleDouble b) => Multiply(a, b);
+
+    /// <summary>Difference operator.</summary>
+    public static DoubleDouble operator -(DoubleDouble a, DoubleDouble b) => Subtract(a, b);
 
     /// <summary>Negation operator.</summary>
     public static DoubleDouble operator -(DoubleDouble a) => Negate(a);

@@ -53,5 +53,19 @@ internal sealed class VectorSum
         return c;
     }
 
+    public DoubleDouble X => _x;
+
+    public DoubleDouble Y => _y;
+
+    public DoubleDouble Z => _z;
+
+    /// <summary>Adds d × (the vector held by <paramref name="f"/>), d given exactly as double-double components.</summary>
+    public void AddCross(DoubleDouble dx, DoubleDouble dy, DoubleDouble dz, VectorSum f)
+    {
+        _x = _x + (dy * f._z) - (dz * f._y);
+        _y = _y + (dz * f._x) - (dx * f._z);
+        _z = _z + (dx * f._y) - (dy * f._x);
+    }
+
     public Vector3 Value => Vector3.Create(_x.Value, _y.Value, _z.Value);
 }

@@ -7,7 +7,9 @@ namespace LoadDiff.Core.Equivalence;
 public static class EquivalenceChecker
 {
     /// <summary>
-    /// The verdict for one case present in both files. Both reductions must be about the same reference point.
+    /// The verdict for one case present in both files. Both reductions must be about the same reference point, which
+    /// only sets where the residual is stated: the verdict compares the moments at the corners of the box of both
+    /// systems' loaded geometry, each formed from its system's own double-double sums, so it does not depend on the point.
     /// The gross magnitudes are the original's: the detailed load set is the reference.
     /// </summary>
     /// <exception cref="ArgumentException">The reductions are about different points.</exception>
@@ -19,10 +21,10 @@ public static class EquivalenceChecker
         Guard.NotNull(tolerance);
         Guard.That(original.ReferencePoint == substitute.ReferencePoint, "Both reductions must be about the same point.", nameof(substitute));
         Vector3 p = original.ReferencePoint;
-        ForceCoupleSystem residual = substitute.System.Subtract(original.System);
+        ResultantSums a = original.Sums, b = substitute.Sums;
         Box? box = Box.Union(original.Bounds, substitute.Bounds);
-        double diagonal = box?.Diagonal ?? 0;
 
+        ForceCoupleSystem residual = ResultantSums.Difference(a, b, p);
         double worst = residual.Moment.Length;
         Vector3 worstAt = p;
         if (box is not null)
@@ -30,7 +32,7 @@ public static class EquivalenceChecker
             worst = -1;
             foreach (Vector3 q in box.Corners)
             {
-                double m = residual.MoveTo(q).Moment.Length;
+                double m = ResultantSums.Difference(a, b, q).Moment.Length;
                 if (m > worst)
                 {
                     worst = m;
@@ -39,17 +41,19 @@ public static class EquivalenceChecker
             }
         }
 
+        RoundingNoise noise = RoundingNoise.Of(original, substitute);
+        double diagonal = tolerance.Length ?? original.Bounds?.Diagonal ?? 0;
         double gf = original.GrossForce;
         double gm = original.GrossCouple + (gf * diagonal);
-        double relF = tolerance.Relative * gf, relM = tolerance.Relative * gm;
-        var applied = new AppliedTolerance(
-            Math.Max(tolerance.Force, relF), Math.Max(tolerance.Moment, relM), relF > tolerance.Force, relM > tolerance.Moment, gf, gm, diagonal);
+        (double allowF, AllowanceSource byF) = AppliedTolerance.Govern(tolerance.Force, tolerance.Relative * gf, noise.Force);
+        (double allowM, AllowanceSource byM) = AppliedTolerance.Govern(tolerance.Moment, tolerance.Relative * gm, noise.Moment);
+        var applied = new AppliedTolerance(allowF, allowM, byF, byM, gf, gm, diagonal, tolerance.Length is not null, noise);
 
-        // Rounding noise of both reductions decides what counts as a zero residual for the axis, not the verdict.
-        double forceScale = Math.Max(original.GrossForce, substitute.GrossForce);
-        double momentScale = Math.Max(original.MomentScale(p), substitute.MomentScale(p));
-        WrenchAnalysis wrench = WrenchAnalysis.Analyse(residual, forceScale, momentScale, parallel: false);
-        var analysis = new ResidualAnalysis(residual, worst, worstAt, wrench);
+        // The residual's own wrench is analysed about the box centre, near the loads, whatever the reference point.
+        Vector3 centre = box?.Centre ?? p;
+        ForceCoupleSystem atCentre = ResultantSums.Difference(a, b, centre);
+        WrenchAnalysis wrench = WrenchAnalysis.Analyse(atCentre, noise.Force / WrenchAnalysis.RoundingThreshold, noise.Moment / WrenchAnalysis.RoundingThreshold, parallel: false);
+        var analysis = new ResidualAnalysis(residual, worst, worstAt, wrench, atCentre);
         bool pass = analysis.ForceNorm <= applied.Force && worst <= applied.Moment;
         return new CaseComparison(name, kind, original, substitute, analysis, applied, OnlyIn.Both, pass, notes ?? []);
     }

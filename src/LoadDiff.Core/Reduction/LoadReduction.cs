@@ -5,13 +5,26 @@ namespace LoadDiff.Core.Reduction;
 /// <param name="GrossForce">G_F = Σ|F_i| (∫|w| for distributed loads), force units.</param>
 /// <param name="GrossCouple">Σ|C_j| of free couples, force × length.</param>
 /// <param name="Centroid">Load centroid Σ|F_i| r_i / Σ|F_i|; null when there are no forces.</param>
-/// <param name="Bounds">Bounding box of the geometry; null when there is none (couples only or empty).</param>
+/// <param name="Bounds">Bounding box of the loaded geometry (items whose gross magnitude is not zero); null when there is
+/// none (couples only, zero loads only, or empty).</param>
 /// <param name="AllForcesParallel">True when every force has the same line direction (a parallel system).</param>
 /// <param name="ItemCount">Number of items reduced.</param>
 public sealed record LoadReduction(
     ForceCoupleSystem System, double GrossForce, double GrossCouple, Vector3? Centroid, Box? Bounds,
     bool AllForcesParallel, long ItemCount)
 {
+    private readonly ResultantSums? _sums;
+
+    /// <summary>
+    /// The accumulated double-double sums behind <see cref="System"/> (about the accumulator's anchor); for a reduction
+    /// made by hand, the system's own doubles. Verdicts compare moments from these, never from a moved <see cref="System"/>.
+    /// </summary>
+    public ResultantSums Sums
+    {
+        get => _sums ?? ResultantSums.From(System);
+        init => _sums = value;
+    }
+
     /// <summary>The reference point of <see cref="System"/>.</summary>
     public Vector3 ReferencePoint => System.ReferencePoint;
 

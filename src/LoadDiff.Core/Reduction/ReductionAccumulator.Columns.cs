@@ -35,22 +35,26 @@ public sealed partial class ReductionAccumulator
         {
             return true;
         }
-        Vector3 anchor = Anchor ?? Vector3.Create(x[0], y[0], z[0]);
-        Vector3 direction = _direction;
-        bool parallel = _parallel;
-        if (parallel && direction.IsZero)
+        // The anchor and the direction come from the first loaded row: a zero force is no loaded geometry.
+        int firstLoaded = -1;
+        for (int i = 0; i < n; i++)
         {
-            for (int i = 0; i < n; i++)
+            if (fx[i] != 0 || fy[i] != 0 || fz[i] != 0)
             {
-                if (fx[i] != 0 || fy[i] != 0 || fz[i] != 0)
-                {
-                    direction = Vector3.Create(fx[i], fy[i], fz[i]).Normalize();
-                    break;
-                }
+                firstLoaded = i;
+                break;
             }
         }
+        int a0 = Math.Max(firstLoaded, 0);
+        Vector3 anchor = Anchor ?? Vector3.Create(x[a0], y[a0], z[a0]);
+        Vector3 direction = _direction;
+        bool parallel = _parallel;
+        if (parallel && direction.IsZero && firstLoaded >= 0)
+        {
+            direction = Vector3.Create(fx[firstLoaded], fy[firstLoaded], fz[firstLoaded]).Normalize();
+        }
 
-        var lanes = new Lanes(anchor, direction, Vector3.Create(x[0], y[0], z[0]));
+        var lanes = new Lanes(anchor, direction);
         int whole = n & ~3;
         for (int i = 0; i < whole; i += 4)
         {
@@ -80,15 +84,22 @@ public sealed partial class ReductionAccumulator
             return false;
         }
 
-        Anchor = anchor;
+        if (firstLoaded >= 0)
+        {
+            Anchor = anchor;
+        }
         _force.Add(lanes.Fx.Total(), lanes.Fy.Total(), lanes.Fz.Total());
         _moment.Add(lanes.Mx.Total(), lanes.My.Total(), lanes.Mz.Total());
         _gross += lanes.Gross.Total();
         _grossFirst.Add(lanes.Gx.Total(), lanes.Gy.Total(), lanes.Gz.Total());
         for (int k = 0; k < Vector256<double>.Count; k++)
         {
-            Extend(Vector3.Create(lanes.MinX[k], lanes.MinY[k], lanes.MinZ[k]));
-            Extend(Vector3.Create(lanes.MaxX[k], lanes.MaxY[k], lanes.MaxZ[k]));
+            // a lane that saw no loaded row still holds +∞ … −∞
+            if (lanes.MinX[k] <= lanes.MaxX[k])
+            {
+                Extend(Vector3.Create(lanes.MinX[k], lanes.MinY[k], lanes.MinZ[k]));
+                Extend(Vector3.Create(lanes.MaxX[k], lanes.MaxY[k], lanes.MaxZ[k]));
+            }
         }
         if (parallel)
         {
@@ -152,7 +163,7 @@ public sealed partial class ReductionAccumulator
         private readonly Vector256<double> _ax, _ay, _az, _ux, _uy, _uz;
         private Vector256<double> _notParallel;
 
-        public Lanes(Vector3 anchor, Vector3 direction, Vector3 first)
+        public Lanes(Vector3 anchor, Vector3 direction)
         {
             _ax = Vector256.Create(anchor.X);
             _ay = Vector256.Create(anchor.Y);
@@ -160,9 +171,8 @@ public sealed partial class ReductionAccumulator
             _ux = Vector256.Create(direction.X);
             _uy = Vector256.Create(direction.Y);
             _uz = Vector256.Create(direction.Z);
-            MinX = MaxX = Vector256.Create(first.X);
-            MinY = MaxY = Vector256.Create(first.Y);
-            MinZ = MaxZ = Vector256.Create(first.Z);
+            MinX = MinY = MinZ = Vector256.Create(double.PositiveInfinity);
+            MaxX = MaxY = MaxZ = Vector256.Create(double.NegativeInfinity);
         }
 
         public readonly bool Parallel => _notParallel == Vector256<double>.Zero;
@@ -195,12 +205,15 @@ public sealed partial class ReductionAccumulator
             Gx.Add(dx * g);
             Gy.Add(dy * g);
             Gz.Add(dz * g);
-            MinX = Vector256.Min(MinX, px);
-            MinY = Vector256.Min(MinY, py);
-            MinZ = Vector256.Min(MinZ, pz);
-            MaxX = Vector256.Max(MaxX, px);
-            MaxY = Vector256.Max(MaxY, py);
-            MaxZ = Vector256.Max(MaxZ, pz);
+            // only loaded rows widen the box (|F| > 0; the padding rows and zero nodal forces are not loaded)
+            Vector256<double> loaded = Vector256.GreaterThan(g, Vector256<double>.Zero);
+            Vector256<double> up = Vector256.Create(double.PositiveInfinity), down = Vector256.Create(double.NegativeInfinity);
+            MinX = Vector256.Min(MinX, Vector256.ConditionalSelect(loaded, px, up));
+            MinY = Vector256.Min(MinY, Vector256.ConditionalSelect(loaded, py, up));
+            MinZ = Vector256.Min(MinZ, Vector256.ConditionalSelect(loaded, pz, up));
+            MaxX = Vector256.Max(MaxX, Vector256.ConditionalSelect(loaded, px, down));
+            MaxY = Vector256.Max(MaxY, Vector256.ConditionalSelect(loaded, py, down));
+            MaxZ = Vector256.Max(MaxZ, Vector256.ConditionalSelect(loaded, pz, down));
             // |F × u|² ≤ tol²|F|² for every force (zero forces pass), as LoadItem.Parallel tests it; once one force
             // is not parallel the answer is known and the test is skipped
             if (_notParallel == Vector256<double>.Zero)

@@ -35,7 +35,7 @@ public sealed partial class ReductionAccumulator
     /// <summary>Number of items added (mesh triangles count one each).</summary>
     public long Count { get; private set; }
 
-    /// <summary>Adds one item's exact contribution.</summary>
+    /// <summary>Adds one item's exact contribution. An item that is not loaded (zero magnitude) is counted, nothing more.</summary>
     public void Add(LoadItem item)
     {
         Guard.NotNull(item);
@@ -44,24 +44,39 @@ public sealed partial class ReductionAccumulator
             AddPointForce(pf.At, pf.Value);
             return;
         }
-        if (Anchor is null)
+        Vector3? first = Anchor;
+        if (first is null)
         {
-            item.VisitGeometry(p => Anchor ??= p);
+            item.VisitGeometry(p => first ??= p);
         }
-        Contribution c = item.ContributionAbout(Anchor ?? Vector3.Zero);
+        Contribution c = item.ContributionAbout(first ?? Vector3.Zero);
+        Count++;
+        if (c.GrossForce == 0 && c.GrossCouple == 0)
+        {
+            // zero magnitude: no loaded geometry, so neither the anchor, the box nor the direction may take it
+            return;
+        }
+        Anchor ??= first;
         _force.Add(c.Force);
         _moment.Add(c.Moment);
         _gross += c.GrossForce;
         _grossFirst.Add(c.GrossFirstMoment);
         _grossCouple += c.GrossCouple;
-        item.VisitGeometry(Extend);
+        if (c.GrossForce > 0)
+        {
+            item.VisitGeometry(Extend);
+        }
         TrackDirection(item.ForceDirection, item);
-        Count++;
     }
 
-    /// <summary>Adds a concentrated force; the moment terms are formed exactly (FMA two-product).</summary>
+    /// <summary>Adds a concentrated force; the moment terms are formed exactly (FMA two-product). A zero force is counted only.</summary>
     public void AddPointForce(Vector3 at, Vector3 force)
     {
+        Count++;
+        if (force.IsZero)
+        {
+            return;
+        }
         Anchor ??= at;
         Vector3 d = at - Anchor.Value;
         _force.Add(force);
@@ -71,14 +86,18 @@ public sealed partial class ReductionAccumulator
         _grossFirst.Add(d * g);
         Extend(at);
         TrackDirection(force, null);
-        Count++;
     }
 
-    /// <summary>Adds one pressure-map triangle (see <see cref="MeshTriangle"/>) without building an item.</summary>
+    /// <summary>Adds one pressure-map triangle (see <see cref="MeshTriangle"/>) without building an item; one of zero pressure is counted only.</summary>
     public void AddTriangle(Vector3 a, Vector3 b, Vector3 c, double pressureA, double pressureB, double pressureC, Vector3? direction)
     {
+        Count++;
+        Contribution k = MeshTriangle.Reduce(a, b, c, pressureA, pressureB, pressureC, direction, Anchor ?? a);
+        if (k.GrossForce == 0)
+        {
+            return;
+        }
         Anchor ??= a;
-        Contribution k = MeshTriangle.Reduce(a, b, c, pressureA, pressureB, pressureC, direction, Anchor.Value);
         _force.Add(k.Force);
         _moment.Add(k.Moment);
         _gross += k.GrossForce;
@@ -87,7 +106,6 @@ public sealed partial class ReductionAccumulator
         Extend(b);
         Extend(c);
         TrackDirection(direction ?? Vector3.Cross(b - a, c - a), null);
-        Count++;
     }
 
     /// <summary>Adds a free couple.</summary>
@@ -105,6 +123,12 @@ public sealed partial class ReductionAccumulator
         Guard.Finite(factor);
         if (other.Count == 0)
         {
+            return;
+        }
+        if (factor == 0)
+        {
+            // a case with factor 0 is no loaded geometry of the combination
+            Count += other.Count;
             return;
         }
         Anchor ??= other.Anchor;
@@ -127,16 +151,13 @@ public sealed partial class ReductionAccumulator
             Extend(other._min);
             Extend(other._max);
         }
-        if (factor != 0)
+        if (!other._parallel)
         {
-            if (!other._parallel)
-            {
-                _parallel = false;
-            }
-            else if (!other._direction.IsZero)
-            {
-                TrackDirection(other._direction, null);
-            }
+            _parallel = false;
+        }
+        else if (!other._direction.IsZero)
+        {
+            TrackDirection(other._direction, null);
         }
         Count += other.Count;
     }
@@ -146,13 +167,17 @@ public sealed partial class ReductionAccumulator
     {
         Vector3 anchor = Anchor ?? point;
         VectorSum moment = _moment.Clone();
-        moment.AddCross(anchor - point, _force);
+        moment.AddCross(
+            DoubleDouble.Difference(anchor.X, point.X), DoubleDouble.Difference(anchor.Y, point.Y), DoubleDouble.Difference(anchor.Z, point.Z), _force);
         double gross = _gross.Value;
         Vector3? centroid = gross > 0 ? anchor + (_grossFirst.Value / gross) : null;
         Box? box = _hasBounds ? new Box(_min, _max) : null;
         return new LoadReduction(
             new ForceCoupleSystem(_force.Value, moment.Value, point),
-            gross, _grossCouple.Value, centroid, box, _parallel && !_direction.IsZero, Count);
+            gross, _grossCouple.Value, centroid, box, _parallel && !_direction.IsZero, Count)
+        {
+            Sums = new ResultantSums(_force.X, _force.Y, _force.Z, _moment.X, _moment.Y, _moment.Z, anchor),
+        };
     }
 
     private void Extend(Vector3 p)
