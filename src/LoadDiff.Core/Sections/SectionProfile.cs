@@ -49,8 +49,9 @@ public static class SectionProfile
 
     /// <summary>
     /// Stations from <paramref name="from"/> to <paramref name="to"/>: <paramref name="count"/> evenly spaced ones,
-    /// plus every item boundary (vertex station) inside the range so the profile is exact where a load starts, ends
-    /// or jumps. <paramref name="boundariesIncluded"/> is false when there were more than <see cref="MaxBoundaryStations"/>.
+    /// plus every boundary (vertex station) of a loaded item inside the range so the profile is exact where a load starts,
+    /// ends or jumps; an item of zero magnitude (<see cref="LoadItem.IsLoaded"/> false) adds none.
+    /// <paramref name="boundariesIncluded"/> is false when there were more than <see cref="MaxBoundaryStations"/>.
     /// </summary>
     /// <exception cref="ArgumentException">The range is not finite or reversed, or the count is below 2.</exception>
     public static IReadOnlyList<double> Stations(
@@ -67,7 +68,7 @@ public static class SectionProfile
         }
         var boundaries = new SortedSet<double>();
         boundariesIncluded = true;
-        foreach (LoadItem item in items)
+        foreach (LoadItem item in items.Where(i => i.IsLoaded))
         {
             item.VisitGeometry(p =>
             {
@@ -96,12 +97,15 @@ public static class SectionProfile
         return [.. set];
     }
 
-    /// <summary>The lowest and highest station of all located geometry, or null when there is none.</summary>
+    /// <summary>
+    /// The lowest and highest station of the loaded located geometry (items with <see cref="LoadItem.IsLoaded"/>; a zero
+    /// force or a line of zero intensity extends no range), or null when there is none.
+    /// </summary>
     public static (double Min, double Max)? Extent(SectionAxis axis, IEnumerable<LoadItem> items)
     {
         Guard.NotNull(items);
         double min = double.PositiveInfinity, max = double.NegativeInfinity;
-        foreach (LoadItem item in items)
+        foreach (LoadItem item in items.Where(i => i.IsLoaded))
         {
             if (HalfSpaceClip.StationRange(item, axis) is { } r)
             {
@@ -112,11 +116,23 @@ public static class SectionProfile
         return min <= max ? (min, max) : null;
     }
 
+    /// <summary>
+    /// <see cref="Extent(SectionAxis, IEnumerable{LoadItem})"/> of a factored sum of cases: a case with factor 0 is no load
+    /// in it and extends nothing.
+    /// </summary>
+    public static (double Min, double Max)? Extent(SectionAxis axis, IEnumerable<WeightedItems> groups) =>
+        Extent(axis, ItemsOfFactoredCases(groups));
+
+    /// <summary>The items of the groups with a non-zero factor, loaded or not.</summary>
+    internal static IEnumerable<LoadItem> ItemsOfFactoredCases(IEnumerable<WeightedItems> groups) =>
+        Guard.NotNull(groups).Where(g => g.Factor != 0).SelectMany(g => g.Items);
+
     private static ForceCoupleSystem[] ComputeOne(SectionAxis axis, IReadOnlyList<double> stations, IReadOnlyList<LoadItem> items, out Vector3 couple)
     {
         var located = new List<(LoadItem Item, double Min, double Max)>(items.Count);
         var couples = new VectorSum();
-        foreach (LoadItem item in items)
+        // An item of zero magnitude adds nothing at any cut; left out, it cannot widen the rounding reach either.
+        foreach (LoadItem item in items.Where(i => i.IsLoaded))
         {
             if (item is FreeCouple c)
             {
