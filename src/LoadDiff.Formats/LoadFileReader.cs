@@ -237,8 +237,15 @@ public static class LoadFileReader
     {
         string name = Path.GetFileNameWithoutExtension(path);
         var units = new UnitConversion(options.CsvUnits, options.TargetUnits ?? options.CsvUnits);
+        // A CSV has no units block: its units are stated only when the caller chose them (ReadOptions.CsvUnits).
+        bool given = options.CsvUnitsGiven;
         var header = new DocumentHeader(null, units.Source, units.Target,
-            System.Collections.Immutable.ImmutableSortedDictionary<string, LoadDiff.Core.Vector3>.Empty);
+            System.Collections.Immutable.ImmutableSortedDictionary<string, LoadDiff.Core.Vector3>.Empty)
+        {
+            ForceUnitStated = given,
+            LengthUnitStated = given,
+            MassUnitStated = given,
+        };
         sink.Header(header);
         sink.BeginCase(name, null);
         long count = 0;

@@ -8,8 +8,18 @@ public sealed record ReadOptions
     /// <summary>Deliver items in these units (exact factor conversion); null keeps the file's own units.</summary>
     public UnitSystem? TargetUnits { get; init; }
 
+    // Null until set: a CSV carries no units of its own, so only a value set here counts as units stated.
+    private readonly UnitSystem? _csvUnits;
+
     /// <summary>Units of a CSV file given directly (a CSV carries no units of its own); SI by default.</summary>
-    public UnitSystem CsvUnits { get; init; } = UnitSystem.Si;
+    public UnitSystem CsvUnits
+    {
+        get => _csvUnits ?? UnitSystem.Si;
+        init => _csvUnits = value;
+    }
+
+    /// <summary>True when <see cref="CsvUnits"/> was set, so the header of a CSV given directly reports its units as stated.</summary>
+    internal bool CsvUnitsGiven => _csvUnits is not null;
 
     /// <summary>Accept referenced files outside the model's folder (absolute paths or <c>..</c>).</summary>
     public bool AllowOutside { get; init; }

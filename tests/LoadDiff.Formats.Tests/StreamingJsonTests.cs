@@ -44,6 +44,7 @@ public class StreamingJsonTests
         Assert.Equal(whole.Diagnostics.Select(Describe), streamed.Diagnostics.Select(Describe));
         if (whole.Succeeded)
         {
+            Assert.Equal(whole.Header, streamed.Header);
             Assert.Equal(a.Events, b.Events);
             Assert.Equal(a.Cases.SelectMany(c => c.Items), b.Cases.SelectMany(c => c.Items));
         }

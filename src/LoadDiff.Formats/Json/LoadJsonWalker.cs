@@ -60,7 +60,8 @@ internal sealed class LoadJsonWalker
             }
         }
         string? title = root["title"] is { } t ? String(t, "$.title") : null;
-        UnitSystem source = ReadUnits(root["units"]);
+        JsonNode? unitsNode = root["units"];
+        UnitSystem source = ReadUnits(unitsNode);
         UnitSystem target = _options.TargetUnits ?? source;
         _units = new UnitConversion(source, target);
         Vector3 g = root["gravity"] is { } gn
@@ -82,7 +83,13 @@ internal sealed class LoadJsonWalker
             throw Error(cases, "$.cases", Codes.NoCases, "'cases' is empty: a load description needs at least one load case");
         }
         List<LoadCombination> combinations = ReadCombinations(root["combinations"], cases);
-        var header = new DocumentHeader(title, source, target, _points.ToImmutableSortedDictionary(StringComparer.Ordinal));
+        // ReadUnits has checked that a 'units' node is an object; an absent key is a unit the file left to the default.
+        var header = new DocumentHeader(title, source, target, _points.ToImmutableSortedDictionary(StringComparer.Ordinal))
+        {
+            ForceUnitStated = unitsNode?["force"] is not null,
+            LengthUnitStated = unitsNode?["length"] is not null,
+            MassUnitStated = unitsNode?["mass"] is not null,
+        };
         sink.Header(header);
         foreach (JsonMember c in cases.Members)
         {
