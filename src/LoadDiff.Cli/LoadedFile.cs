@@ -1,4 +1,5 @@
 using LoadDiff.Core;
+using LoadDiff.Core.Equivalence;
 using LoadDiff.Core.Model;
 using LoadDiff.Core.Reduction;
 using LoadDiff.Core.Units;
@@ -69,6 +70,9 @@ public sealed class LoadedFile
         }
         return new LoadedFile(path, sink, result.Header, referenced);
     }
+
+    /// <summary>This file as one side of a check.</summary>
+    public CheckSide Side => new(Path, Sink, Header);
 
     /// <summary>True when the file defines a case or a combination of this name.</summary>
     public bool Defines(string name) => Sink.Cases.ContainsKey(name) || Sink.Combinations.Any(c => c.Name == name);

@@ -1,6 +1,7 @@
 using System.Globalization;
 using System.Security.Cryptography;
 using System.Text;
+using LoadDiff.Core.Equivalence;
 using LoadDiff.Reports;
 using LoadDiff.Reports.Html;
 

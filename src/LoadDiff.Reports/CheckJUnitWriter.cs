@@ -14,8 +14,9 @@ public static class CheckJUnitWriter
         ArgumentNullException.ThrowIfNull(output);
         var settings = new XmlWriterSettings { Indent = true, OmitXmlDeclaration = false, NewLineChars = "\n" };
         using XmlWriter x = XmlWriter.Create(output, settings);
-        string tests = result.Comparisons.Count.ToString(System.Globalization.CultureInfo.InvariantCulture);
-        string failures = result.FailureCount.ToString(System.Globalization.CultureInfo.InvariantCulture);
+        IReadOnlyList<LoadDiff.Core.Sections.SectionGateCase> gate = result.SectionGate?.Cases ?? [];
+        string tests = (result.Comparisons.Count + gate.Count).ToString(System.Globalization.CultureInfo.InvariantCulture);
+        string failures = (result.FailureCount + gate.Count(g => !g.Passes)).ToString(System.Globalization.CultureInfo.InvariantCulture);
         x.WriteStartDocument();
         x.WriteStartElement("testsuites");
         x.WriteAttributeString("name", "loaddiff check");
@@ -38,10 +39,33 @@ public static class CheckJUnitWriter
                 x.WriteStartElement("failure");
                 x.WriteAttributeString("message", CheckWords.FailureReason(c, result));
                 x.WriteAttributeString("type", c.Presence == OnlyIn.Both ? "not-equivalent" : "missing");
-                x.WriteString(c.Residual is null ? CheckWords.FailureReason(c, result) : CheckWords.Missing(c, result));
+                x.WriteString(string.Join("\n", [CheckWords.FailureReason(c, result), .. CheckWords.Explanation(c, result)]));
+                x.WriteEndElement();
+            }
+            else if (c.Notes.Count > 0)
+            {
+                x.WriteElementString("system-out", "note: " + string.Join("; ", c.Notes));
+            }
+            x.WriteEndElement();
+        }
+        foreach (LoadDiff.Core.Sections.SectionGateCase g in gate)
+        {
+            x.WriteStartElement("testcase");
+            x.WriteAttributeString("classname", "loaddiff.check.section-gate");
+            x.WriteAttributeString("name", g.Name);
+            if (!g.Passes)
+            {
+                x.WriteStartElement("failure");
+                x.WriteAttributeString("message", CheckWords.GateCase(g, result).Trim());
+                x.WriteAttributeString("type", "section-gate");
+                x.WriteString(CheckWords.GateCase(g, result).Trim());
                 x.WriteEndElement();
             }
             x.WriteEndElement();
+        }
+        if (result.Warnings.Count > 0)
+        {
+            x.WriteElementString("system-err", string.Join("\n", result.Warnings.Select(v => "warning: " + v)));
         }
         x.WriteEndElement();
         x.WriteEndElement();

@@ -11,38 +11,62 @@ public static class CheckMarkdownRenderer
         ArgumentNullException.ThrowIfNull(result);
         ArgumentNullException.ThrowIfNull(w);
         string f = result.Units.Force.Symbol, l = result.Units.Length.Symbol, m = result.Units.MomentSymbol;
-        string verdict = result.Equivalent ? "✅ equivalent" : $"❌ not equivalent ({result.FailureCount} of {result.Comparisons.Count} fail)";
-        w.WriteLine($"### Static equivalence: {verdict}");
+        string verdict = result.Equivalent ? "✅ equivalent" : "❌ " + CheckWords.Overall(result);
+        w.WriteLine($"### Static equivalence: {Esc(verdict)}");
         w.WriteLine();
         w.WriteLine($"`{Esc(result.SubstitutePath)}` checked against `{Esc(result.OriginalPath)}`. Units {f}, {l}; moments in {m} about "
             + $"{NumberText.Readable(result.ReferencePoint)} {l} ({Esc(result.ReferenceDescription)}).");
         w.WriteLine();
         w.WriteLine($"Tolerance: {Esc(CheckWords.Rule(result))}.");
+        foreach (string warning in result.Warnings)
+        {
+            w.WriteLine();
+            w.WriteLine($"⚠️ Warning: {Esc(warning)}.");
+        }
         w.WriteLine();
         w.WriteLine($"| name | kind | verdict | \\|ΔR\\| ({f}) | allowed | worst \\|ΔM\\| ({m}) | allowed | governs (F/M) |");
         w.WriteLine("|---|---|---|---:|---:|---:|---:|---|");
         foreach (CaseComparison c in result.Comparisons)
         {
             string mark = c.Equivalent ? "✅ PASS" : "❌ " + CheckWords.Verdict(c);
-            if (c.Residual is { } r && c.Tolerance is { } t)
+            if (c.Tolerance is { } t)
             {
-                w.WriteLine($"| {Esc(c.Name)} | {CheckWords.Kind(c)} | {mark} | {NumberText.Readable(r.ForceNorm)} | {NumberText.Readable(t.Force)} | "
-                    + $"{NumberText.Readable(r.WorstMomentNorm)} | {NumberText.Readable(t.Moment)} | {CheckWords.Governs(t.ForceGovernedByRelative)}/{CheckWords.Governs(t.MomentGovernedByRelative)} |");
+                w.WriteLine($"| {Esc(c.Name)} | {CheckWords.Kind(c)} | {mark} | {CheckWords.ForceNorm(c)} | {NumberText.Readable(t.Force)} | "
+                    + $"{CheckWords.WorstMoment(c)} | {NumberText.Readable(t.Moment)} | {CheckWords.Governs(t)} |");
             }
             else
             {
                 w.WriteLine($"| {Esc(c.Name)} | {CheckWords.Kind(c)} | {mark} | — | — | — | — | — |");
             }
         }
+        foreach (CaseComparison c in result.Comparisons.Where(c => c.Equivalent && c.Notes.Count > 0))
+        {
+            w.WriteLine();
+            w.WriteLine($"**{Esc(c.Name)}** (PASS): note: {Esc(string.Join("; ", c.Notes))}.");
+        }
         foreach (CaseComparison c in result.Comparisons.Where(c => !c.Equivalent))
         {
             w.WriteLine();
             w.WriteLine($"**{Esc(c.Name)}**: {Esc(CheckWords.FailureReason(c, result))}.");
-            if (c.Residual is not null)
+            foreach (string line in CheckWords.Explanation(c, result))
             {
-                w.WriteLine($"{Esc(CheckWords.Missing(c, result))}");
+                w.WriteLine();
+                w.WriteLine(Esc(line));
             }
         }
+        IReadOnlyList<string> gate = CheckWords.Gate(result);
+        if (gate.Count > 0)
+        {
+            w.WriteLine();
+            w.WriteLine($"**{Esc(gate[0])}**");
+            w.WriteLine();
+            foreach (string line in gate.Skip(1))
+            {
+                w.WriteLine("- " + Esc(line.Trim()));
+            }
+        }
+        w.WriteLine();
+        w.WriteLine("**Result: " + Esc(CheckWords.Overall(result)) + "**");
         w.WriteLine();
         w.WriteLine("> " + Caution.Text);
     }

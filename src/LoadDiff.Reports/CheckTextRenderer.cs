@@ -18,6 +18,10 @@ public static class CheckTextRenderer
         w.WriteLine($"  units:       force {f}, length {l}, moment {m}");
         w.WriteLine($"  moments about {NumberText.Readable(result.ReferencePoint)} {l} ({result.ReferenceDescription})");
         w.WriteLine($"  tolerance:   {CheckWords.Rule(result)}");
+        foreach (string warning in result.Warnings)
+        {
+            w.WriteLine($"  warning:     {warning}");
+        }
         w.WriteLine();
         int nameWidth = Math.Max(4, result.Comparisons.Max(c => c.Name.Length));
         string header = $"  {"name".PadRight(nameWidth)}  {"kind",-11}  {"verdict",-24}  {"|ΔR|",-11}  {"allowed",-11}  {"worst |ΔM|",-11}  {"allowed",-11}  governs (F/M)";
@@ -25,18 +29,25 @@ public static class CheckTextRenderer
         w.WriteLine("  " + new string('-', header.Length - 2));
         foreach (CaseComparison c in result.Comparisons)
         {
-            string dr = "—", af = "—", dm = "—", am = "—", gov = "—";
-            if (c.Residual is { } r && c.Tolerance is { } t)
+            string af = "—", am = "—", gov = "—";
+            if (c.Tolerance is { } t)
             {
-                dr = NumberText.Readable(r.ForceNorm);
                 af = NumberText.Readable(t.Force);
-                dm = NumberText.Readable(r.WorstMomentNorm);
                 am = NumberText.Readable(t.Moment);
-                gov = CheckWords.Governs(t.ForceGovernedByRelative) + "/" + CheckWords.Governs(t.MomentGovernedByRelative);
+                gov = CheckWords.Governs(t);
             }
-            w.WriteLine($"  {c.Name.PadRight(nameWidth)}  {CheckWords.Kind(c),-11}  {CheckWords.Verdict(c),-24}  {dr,-11}  {af,-11}  {dm,-11}  {am,-11}  {gov}".TrimEnd());
+            w.WriteLine($"  {c.Name.PadRight(nameWidth)}  {CheckWords.Kind(c),-11}  {CheckWords.Verdict(c),-24}  {CheckWords.ForceNorm(c),-11}  {af,-11}  {CheckWords.WorstMoment(c),-11}  {am,-11}  {gov}".TrimEnd());
         }
-        w.WriteLine($"  (|ΔR| in {f}; |ΔM| in {m}, the largest over the corners of the box)");
+        w.WriteLine($"  (|ΔR| in {f}; |ΔM| in {m}, the largest over the corners of the box; 0 = within rounding noise)");
+        foreach (CaseComparison c in result.Comparisons.Where(c => c.Equivalent && c.Notes.Count > 0))
+        {
+            w.WriteLine();
+            w.WriteLine($"{(c.Kind == LoadDiff.Core.Model.EntryKind.Case ? "Case" : "Combination")} \"{c.Name}\": PASS, with note{(c.Notes.Count > 1 ? "s" : "")}:");
+            foreach (string note in c.Notes)
+            {
+                w.WriteLine($"  note: {note}");
+            }
+        }
         foreach (CaseComparison c in result.Comparisons.Where(c => !c.Equivalent))
         {
             w.WriteLine();
@@ -44,19 +55,23 @@ public static class CheckTextRenderer
             w.WriteLine($"  {CheckWords.FailureReason(c, result)}");
             if (c.Original is { } o)
             {
-                w.WriteLine($"  original    R = {NumberText.Readable(o.Force, Noise(o))} {f}   M = {NumberText.Readable(o.Moment, MomentNoise(o))} {m}");
+                (double nf, double nm) = CheckWords.Noise(o);
+                w.WriteLine($"  original    R = {NumberText.Readable(o.Force, nf)} {f}   M = {NumberText.Readable(o.Moment, nm)} {m}");
             }
             if (c.Substitute is { } s)
             {
-                w.WriteLine($"  substitute  R = {NumberText.Readable(s.Force, Noise(s))} {f}   M = {NumberText.Readable(s.Moment, MomentNoise(s))} {m}");
+                (double nf, double nm) = CheckWords.Noise(s);
+                w.WriteLine($"  substitute  R = {NumberText.Readable(s.Force, nf)} {f}   M = {NumberText.Readable(s.Moment, nm)} {m}");
             }
             if (c.Residual is { } res)
             {
-                double fn = Math.Max(Noise(c.Original!), Noise(c.Substitute!));
-                double mn = Math.Max(MomentNoise(c.Original!), MomentNoise(c.Substitute!));
+                (double fn, double mn) = CheckWords.ResidualNoise(c, result.ReferencePoint);
                 w.WriteLine($"  residual   ΔR = {NumberText.Readable(res.System.Force, fn)} {f}  ΔM = {NumberText.Readable(res.System.Moment, mn)} {m} (substitute − original)");
                 w.WriteLine($"  worst |ΔM| at corner {NumberText.Readable(res.WorstCorner)} {l}");
-                w.WriteLine("  " + CheckWords.Missing(c, result));
+                foreach (string line in CheckWords.Explanation(c, result))
+                {
+                    w.WriteLine("  " + line);
+                }
             }
             if (result.Contributors.TryGetValue(c.Name, out CaseContributors? k))
             {
@@ -64,10 +79,18 @@ public static class CheckTextRenderer
                 WriteContributors(w, "largest in substitute:", k.Substitute, result);
             }
         }
+        IReadOnlyList<string> gate = CheckWords.Gate(result);
+        if (gate.Count > 0)
+        {
+            w.WriteLine();
+            foreach (string line in gate)
+            {
+                w.WriteLine(line);
+            }
+            w.WriteLine(LoadDiff.Reports.Sections.SectionsResult.SectionCaution);
+        }
         w.WriteLine();
-        w.WriteLine(result.Equivalent
-            ? $"Result: EQUIVALENT — {(result.Comparisons.Count == 1 ? "the one case is" : $"all {result.Comparisons.Count} cases and combinations are")} within tolerance."
-            : $"Result: NOT EQUIVALENT — {result.FailureCount} of {result.Comparisons.Count} cases and combinations fail.");
+        w.WriteLine("Result: " + CheckWords.Overall(result));
         w.WriteLine(Caution.Text);
     }
 
@@ -78,8 +101,4 @@ public static class CheckTextRenderer
             w.WriteLine($"  {(i == 0 ? label : new string(' ', label.Length))} {CheckWords.Contributor(list[i], r)}");
         }
     }
-
-    internal static double Noise(LoadReduction r) => WrenchAnalysis.RoundingThreshold * r.GrossForce;
-
-    internal static double MomentNoise(LoadReduction r) => WrenchAnalysis.RoundingThreshold * r.MomentScale(r.ReferencePoint);
 }

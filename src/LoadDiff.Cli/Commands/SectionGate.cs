@@ -50,52 +50,28 @@ public sealed class SectionGate
     }
 
     /// <summary>
-    /// Runs the gate when asked for and reports it: after the check's text or Markdown on <paramref name="output"/>, and on
-    /// <paramref name="error"/> for JSON and JUnit so those stay valid documents. True when it passes or was not asked for.
+    /// Runs the gate when asked for: reads both files with their items and evaluates Core's gate rule. Null when the gate
+    /// was not asked for; the verdict goes into the check's result, which every format renders.
     /// </summary>
-    public bool Run(ParseResult parse, string originalPath, string substitutePath, UnitSystem units,
-        IReadOnlyCollection<string> selected, string format, TextWriter output, TextWriter error) =>
-        Run(parse, originalPath, substitutePath, units, selected, format, output, error, out _);
-
-    /// <summary>As <see cref="Run(ParseResult, string, string, UnitSystem, IReadOnlyCollection{string}, string, TextWriter, TextWriter)"/>, also giving the profiles (null when not asked for) for a report.</summary>
-    public bool Run(ParseResult parse, string originalPath, string substitutePath, UnitSystem units,
-        IReadOnlyCollection<string> selected, string format, TextWriter output, TextWriter error, out SectionsResult? profiles)
+    public SectionGateVerdict? Evaluate(ParseResult parse, string originalPath, string substitutePath, UnitSystem units,
+        IReadOnlyCollection<string> selected, TextWriter error, out SectionsResult? profiles)
     {
         profiles = null;
         ArgumentNullException.ThrowIfNull(parse);
-        ArgumentNullException.ThrowIfNull(output);
         ArgumentNullException.ThrowIfNull(error);
         Vector3? direction = parse.GetValue(Axis);
         double? tolerance = parse.GetValue(Tolerance);
         Validate(parse, originalPath, substitutePath);
         if (direction is null || tolerance is not { } rel)
         {
-            return true;
+            return null;
         }
         CollectedFile a = CollectedFile.Read(originalPath, units, error);
         CollectedFile b = CollectedFile.Read(substitutePath, units, error);
         var axis = SectionAxis.Create(Vector3.Zero, direction.Value);
         SectionsResult result = SectionsCommand.Compute(a, b, axis, null, null, SectionOptions.DefaultStations, selected, error);
         profiles = result;
-        TextWriter w = format is "text" or "markdown" ? output : error;
-        string m = units.MomentSymbol, l = units.Length.Symbol;
-        w.WriteLine();
-        w.WriteLine($"Section-cut gate along e1 = {NumberText.Readable(axis.Direction)} through the origin: fail when the largest |ΔM(s)| exceeds "
-            + $"{NumberText.Readable(rel)} of the original's peak |M(s)|");
-        bool pass = true;
-        int width = result.Entries.Max(e => e.Name.Length);
-        foreach (SectionsEntry e in result.Entries)
-        {
-            SectionComparison c = e.Comparison;
-            double allowed = rel * c.OriginalPeakMoment;
-            bool ok = c.MaxMomentDeviation <= allowed;
-            pass &= ok;
-            w.WriteLine($"  {e.Name.PadRight(width)}  {(ok ? "PASS" : "FAIL")}  largest |ΔM| = {NumberText.Readable(c.MaxMomentDeviation)} {m} at s = "
-                + $"{NumberText.Readable(c.MaxMomentDeviationAt)} {l}; allowed {NumberText.Readable(allowed)} {m} (peak {NumberText.Readable(c.OriginalPeakMoment)} {m})");
-        }
-        w.WriteLine(pass ? "Section-cut gate: PASS" : "Section-cut gate: FAIL — the substitute changes the internal effects by more than allowed.");
-        w.WriteLine(SectionsResult.SectionCaution);
-        return pass;
+        return SectionGateVerdict.Evaluate(axis, rel, result.Entries.Select(e => (e.Name, e.Kind, e.Comparison)));
     }
 
     /// <summary>One chart per case and combination for the HTML report (inline SVG, no namespace URL needed inside HTML).</summary>

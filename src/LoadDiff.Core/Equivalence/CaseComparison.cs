@@ -30,6 +30,9 @@ public sealed record CaseComparison(
     string Name, EntryKind Kind, LoadReduction? Original, LoadReduction? Substitute, ResidualAnalysis? Residual,
     AppliedTolerance? Tolerance, OnlyIn Presence, bool Equivalent, IReadOnlyList<string> Notes)
 {
+    /// <summary>How the residual reads against the tolerance, and the items that account for it; null when the case is in one file only.</summary>
+    public ResidualExplanation? Explanation { get; init; }
+
     /// <summary>True when |ΔR| is within its tolerance.</summary>
     public bool ForcePasses => Residual is not null && Tolerance is not null && Residual.ForceNorm <= Tolerance.Force;
 

@@ -11,6 +11,7 @@ public sealed class ReductionSink : IReducedBlockSink
     private readonly Dictionary<string, string?> _titles = new(StringComparer.Ordinal);
     private readonly List<LoadCombination> _combinations = [];
     private readonly Dictionary<string, ContributorTracker> _contributors = new(StringComparer.Ordinal);
+    private readonly HashSet<string> _blockCases = new(StringComparer.Ordinal);
     private readonly Func<string, bool>? _caseFilter;
     private readonly int _topContributors;
     private ReductionAccumulator? _current;
@@ -27,6 +28,13 @@ public sealed class ReductionSink : IReducedBlockSink
 
     /// <summary>The largest contributors of a case, when the sink was asked to keep them.</summary>
     public ContributorTracker? Contributors(string caseName) => _contributors.GetValueOrDefault(caseName);
+
+    /// <summary>
+    /// True when the kept contributors of a case are not all its items: the tracker was full, or part of the case
+    /// arrived as reduced blocks (of which only the largest items are seen).
+    /// </summary>
+    public bool ContributorsBounded(string caseName) =>
+        _blockCases.Contains(caseName) || (_contributors.GetValueOrDefault(caseName)?.Truncated ?? false);
 
     /// <summary>The header, once read.</summary>
     public DocumentHeader? DocumentHeader { get; private set; }
@@ -91,6 +99,7 @@ public sealed class ReductionSink : IReducedBlockSink
         _current?.AddScaled(block, 1);
         if (_tracker is not null)
         {
+            _blockCases.Add(_caseOrder[^1]);
             foreach (Contributor c in largest)
             {
                 _tracker.Offer(c);

@@ -3,18 +3,21 @@ using LoadDiff.Core.Loads;
 namespace LoadDiff.Core.Reduction;
 
 /// <summary>
-/// Keeps the largest contributors of a case while items stream past: forces ranked by |F| and couples by |C|,
-/// a few of each. Consecutive items with the same id (a mesh's triangles) are summed first. Memory is constant.
+/// Keeps the largest contributors of a case while items stream past: forces ranked by |F| and couples by |C|, up to a
+/// capacity of each (a min-heap, so a large capacity costs log n per item). Consecutive items with the same id (a
+/// mesh's triangles) are summed first. Memory is bounded by the capacity.
 /// </summary>
 public sealed class ContributorTracker
 {
     private readonly int _capacity;
-    private readonly List<Contributor> _forces = [];
-    private readonly List<Contributor> _couples = [];
+    private readonly PriorityQueue<Ranked, (double, long)> _forces = new();
+    private readonly PriorityQueue<Ranked, (double, long)> _couples = new();
+    private long _sequence;
     private string? _pendingId;
     private LoadKind _pendingKind;
     private Vector3 _pendingForce;
     private Vector3 _pendingCouple;
+    private Vector3 _pendingMoment;
     private Vector3 _pendingAnchor;
     private Vector3 _pendingFirst;
     private double _pendingGross;
@@ -26,6 +29,9 @@ public sealed class ContributorTracker
         Guard.That(capacity > 0, "Capacity must be positive.", nameof(capacity));
         _capacity = capacity;
     }
+
+    /// <summary>True when a contributor was left out because the tracker was full.</summary>
+    public bool Truncated { get; private set; }
 
     /// <summary>Offers one item.</summary>
     public void Offer(LoadItem item)
@@ -56,6 +62,7 @@ public sealed class ContributorTracker
             _pendingCouple += c.Moment;
         }
         _pendingForce += c.Force;
+        _pendingMoment += c.Moment;
         _pendingFirst += c.GrossFirstMoment;
         _pendingGross += c.GrossForce;
         _pendingParts++;
@@ -66,19 +73,20 @@ public sealed class ContributorTracker
     {
         Guard.NotNull(contributor);
         Flush();
-        Insert(contributor.Kind == LoadKind.Couple ? _couples : _forces, contributor);
+        Insert(contributor);
     }
 
     /// <summary>True when a contributor of this magnitude would be kept among the forces now.</summary>
-    public bool WouldKeepForce(double magnitude) => _forces.Count < _capacity || magnitude > _forces[^1].Magnitude;
+    public bool WouldKeepForce(double magnitude) =>
+        _forces.Count < _capacity || (_forces.TryPeek(out _, out (double Magnitude, long) least) && magnitude > least.Magnitude);
 
-    /// <summary>The largest force contributors, largest first.</summary>
+    /// <summary>The largest force contributors, largest first (equal ones in the order offered).</summary>
     public IReadOnlyList<Contributor> Forces
     {
         get
         {
             Flush();
-            return _forces;
+            return Sorted(_forces);
         }
     }
 
@@ -88,8 +96,15 @@ public sealed class ContributorTracker
         get
         {
             Flush();
-            return _couples;
+            return Sorted(_couples);
         }
+    }
+
+    private static List<Contributor> Sorted(PriorityQueue<Ranked, (double, long)> heap)
+    {
+        var list = heap.UnorderedItems.Select(e => e.Element).ToList();
+        list.Sort((a, b) => a.Item.Magnitude != b.Item.Magnitude ? b.Item.Magnitude.CompareTo(a.Item.Magnitude) : a.Sequence.CompareTo(b.Sequence));
+        return list.ConvertAll(r => r.Item);
     }
 
     private void Flush()
@@ -99,25 +114,36 @@ public sealed class ContributorTracker
             return;
         }
         Vector3? centroid = _pendingGross > 0 ? _pendingAnchor + (_pendingFirst / _pendingGross) : null;
-        var entry = new Contributor(_pendingId, _pendingKind, _pendingForce, _pendingCouple, centroid, _pendingParts);
-        Insert(_pendingKind == LoadKind.Couple ? _couples : _forces, entry);
+        // the moment about the centroid: M_c = M_anchor + (anchor − c) × F
+        Vector3 momentAtCentroid = centroid is { } c ? _pendingMoment + Vector3.Cross(_pendingAnchor - c, _pendingForce) : _pendingMoment;
+        var entry = new Contributor(_pendingId, _pendingKind, _pendingForce, _pendingCouple, centroid, _pendingParts)
+        {
+            CentroidMoment = momentAtCentroid,
+        };
         _pendingId = null;
-        _pendingForce = _pendingCouple = _pendingFirst = Vector3.Zero;
+        _pendingForce = _pendingCouple = _pendingMoment = _pendingFirst = Vector3.Zero;
         _pendingGross = 0;
         _pendingParts = 0;
+        Insert(entry);
     }
 
-    private void Insert(List<Contributor> list, Contributor entry)
+    private void Insert(Contributor entry)
     {
-        if (list.Count == _capacity && entry.Magnitude <= list[^1].Magnitude)
+        PriorityQueue<Ranked, (double, long)> heap = entry.Kind == LoadKind.Couple ? _couples : _forces;
+        // the heap's least element is the smallest magnitude, and among equals the latest offered (kept last)
+        var key = (entry.Magnitude, -_sequence);
+        var ranked = new Ranked(entry, _sequence++);
+        if (heap.Count < _capacity)
         {
+            heap.Enqueue(ranked, key);
             return;
         }
-        int i = list.FindIndex(x => entry.Magnitude > x.Magnitude);
-        list.Insert(i < 0 ? list.Count : i, entry);
-        if (list.Count > _capacity)
+        Truncated = true;
+        if (heap.TryPeek(out _, out (double Magnitude, long) least) && entry.Magnitude > least.Magnitude)
         {
-            list.RemoveAt(list.Count - 1);
+            heap.EnqueueDequeue(ranked, key);
         }
     }
+
+    private readonly record struct Ranked(Contributor Item, long Sequence);
 }

@@ -24,11 +24,16 @@ public static class HtmlReportCheck
         ArgumentNullException.ThrowIfNull(result);
         ArgumentNullException.ThrowIfNull(info);
         ArgumentNullException.ThrowIfNull(w);
-        string verdict = result.Equivalent ? "EQUIVALENT ✓" : $"NOT EQUIVALENT ✗ ({result.FailureCount} of {result.Comparisons.Count} fail)";
+        string verdict = result.Equivalent ? "EQUIVALENT ✓" : "NOT EQUIVALENT ✗";
         HtmlReportPage.Begin(w, $"Static equivalence check: {result.SubstitutePath} against {result.OriginalPath}");
         w.WriteLine("<header>");
         w.WriteLine($"<h1 id=\"verdict\" data-equivalent=\"{(result.Equivalent ? "true" : "false")}\">Static equivalence check: {HtmlText.Escape(verdict)}</h1>");
         w.WriteLine($"<p>Substitute <code>{HtmlText.Escape(result.SubstitutePath)}</code> checked against the original <code>{HtmlText.Escape(result.OriginalPath)}</code>.</p>");
+        w.WriteLine($"<p id=\"overall\" class=\"{(result.Equivalent ? "verdict-pass" : "verdict-fail")}\">{HtmlText.Escape(CheckWords.Overall(result))}</p>");
+        foreach (string warning in result.Warnings)
+        {
+            w.WriteLine($"<p class=\"warning\">Warning: {HtmlText.Escape(warning)}.</p>");
+        }
         HtmlReportPage.CautionBox(w);
         w.WriteLine("</header>");
         Summary(w, result);
@@ -60,18 +65,16 @@ public static class HtmlReportCheck
         {
             string cls = c.Equivalent ? "verdict-pass" : "verdict-fail";
             string mark = c.Equivalent ? "✓ PASS" : "✗ " + CheckWords.Verdict(c);
-            string ro = c.Original is { } o ? NumberText.Readable(o.Force, CheckTextRenderer.Noise(o)) : "—";
-            string rs = c.Substitute is { } s ? NumberText.Readable(s.Force, CheckTextRenderer.Noise(s)) : "—";
-            string mo = c.Original is { } o2 ? NumberText.Readable(o2.Moment, CheckTextRenderer.MomentNoise(o2)) : "—";
-            string ms = c.Substitute is { } s2 ? NumberText.Readable(s2.Moment, CheckTextRenderer.MomentNoise(s2)) : "—";
-            string dr = "—", af = "—", dm = "—", am = "—", gov = "—";
-            if (c.Residual is { } res && c.Tolerance is { } t)
+            string ro = c.Original is { } o ? NumberText.Readable(o.Force, CheckWords.Noise(o).Force) : "—";
+            string rs = c.Substitute is { } s ? NumberText.Readable(s.Force, CheckWords.Noise(s).Force) : "—";
+            string mo = c.Original is { } o2 ? NumberText.Readable(o2.Moment, CheckWords.Noise(o2).Moment) : "—";
+            string ms = c.Substitute is { } s2 ? NumberText.Readable(s2.Moment, CheckWords.Noise(s2).Moment) : "—";
+            string dr = CheckWords.ForceNorm(c), af = "—", dm = CheckWords.WorstMoment(c), am = "—", gov = "—";
+            if (c.Tolerance is { } t)
             {
-                dr = NumberText.Readable(res.ForceNorm);
                 af = NumberText.Readable(t.Force);
-                dm = NumberText.Readable(res.WorstMomentNorm);
                 am = NumberText.Readable(t.Moment);
-                gov = CheckWords.Governs(t.ForceGovernedByRelative) + "/" + CheckWords.Governs(t.MomentGovernedByRelative);
+                gov = CheckWords.Governs(t);
             }
             w.WriteLine($"<tr data-name=\"{HtmlText.Escape(c.Name)}\" data-kind=\"{CheckWords.Kind(c)}\"><td><a href=\"#entry-{index}\">{HtmlText.Escape(c.Name)}</a></td><td>{CheckWords.Kind(c)}</td>"
                 + $"<td class=\"{cls}\">{HtmlText.Escape(mark)}</td><td class=\"num\">{ro}</td><td class=\"num\">{rs}</td><td class=\"num\">{mo}</td><td class=\"num\">{ms}</td>"
@@ -81,7 +84,19 @@ public static class HtmlReportCheck
         w.WriteLine("</tbody>");
         w.WriteLine("</table>");
         w.WriteLine($"<p class=\"note\">|ΔR| and |ΔM| are the norms of substitute − original; worst |ΔM| is the largest over the corners of the box of both systems. "
-            + $"{NumberText.ReadableDigits.ToString(CultureInfo.InvariantCulture)} significant digits; <code>--format json</code> gives exact values.</p>");
+            + $"{NumberText.ReadableDigits.ToString(CultureInfo.InvariantCulture)} significant digits, 0 within the rounding noise; <code>--format json</code> gives exact values.</p>");
+        IReadOnlyList<string> gate = CheckWords.Gate(r);
+        if (gate.Count > 0)
+        {
+            bool passes = r.SectionGate!.Passes;
+            w.WriteLine($"<div id=\"section-gate\" data-passes=\"{(passes ? "true" : "false")}\"><h3 class=\"{(passes ? "verdict-pass" : "verdict-fail")}\">{HtmlText.Escape(gate[^1])}</h3>");
+            w.WriteLine($"<p>{HtmlText.Escape(gate[0])}.</p><ul>");
+            foreach (string line in gate.Skip(1).Take(gate.Count - 2))
+            {
+                w.WriteLine($"<li>{HtmlText.Escape(line.Trim())}</li>");
+            }
+            w.WriteLine("</ul></div>");
+        }
         w.WriteLine("</section>");
     }
 
@@ -95,9 +110,9 @@ public static class HtmlReportCheck
         {
             w.WriteLine($"<p><strong>Why:</strong> {HtmlText.Escape(CheckWords.FailureReason(c, r))}.</p>");
         }
-        if (c.Residual is not null)
+        foreach (string line in CheckWords.Explanation(c, r))
         {
-            w.WriteLine($"<p>{HtmlText.Escape(CheckWords.Missing(c, r))}</p>");
+            w.WriteLine($"<p class=\"explanation\">{HtmlText.Escape(line)}</p>");
         }
         foreach (string note in c.Equivalent ? c.Notes : [])
         {
@@ -105,14 +120,13 @@ public static class HtmlReportCheck
         }
         w.WriteLine("<table class=\"systems\">");
         w.WriteLine($"<thead><tr><th></th><th>R ({f})</th><th>M about P ({m})</th><th>G_F ({f})</th><th>items</th></tr></thead><tbody>");
-        Row(w, "original", c.Original, CheckTextRenderer.Noise, CheckTextRenderer.MomentNoise);
-        Row(w, "substitute", c.Substitute, CheckTextRenderer.Noise, CheckTextRenderer.MomentNoise);
+        Row(w, "original", c.Original);
+        Row(w, "substitute", c.Substitute);
         if (c.Residual is { } res)
         {
-            double fn = Math.Max(CheckTextRenderer.Noise(c.Original!), CheckTextRenderer.Noise(c.Substitute!));
-            double mn = Math.Max(CheckTextRenderer.MomentNoise(c.Original!), CheckTextRenderer.MomentNoise(c.Substitute!));
+            (double fn, double mn) = CheckWords.ResidualNoise(c, r.ReferencePoint);
             w.WriteLine($"<tr><th>residual ΔR, ΔM</th><td class=\"num\">{NumberText.Readable(res.System.Force, fn)}</td><td class=\"num\">{NumberText.Readable(res.System.Moment, mn)}</td>"
-                + $"<td colspan=\"2\">worst |ΔM| = {NumberText.Readable(res.WorstMomentNorm)} {m} at {NumberText.Readable(res.WorstCorner)} {l}</td></tr>");
+                + $"<td colspan=\"2\">worst |ΔM| = {CheckWords.WorstMoment(c)} {m} at {NumberText.Readable(res.WorstCorner)} {l}</td></tr>");
         }
         w.WriteLine("</tbody></table>");
         if (r.Contributors.TryGetValue(c.Name, out CaseContributors? k) && (k.Original.Count > 0 || k.Substitute.Count > 0))
@@ -148,7 +162,7 @@ public static class HtmlReportCheck
             arrows.Add(new ResultantArrow(rs.Force, rs.Moment, "subs", "R substitute"));
         }
         (Vector3, Vector3)? axis = null;
-        if (c.Residual is { } resid)
+        if (c.Residual is { } resid && c.Explanation is not { Reading: ResidualReading.None })
         {
             arrows.Add(new ResultantArrow(resid.System.Force, resid.System.Moment, "resid", "ΔR residual"));
             if (resid.Wrench.AxisPoint is { } ap && resid.Wrench.AxisDirection is { } ad)
@@ -160,14 +174,15 @@ public static class HtmlReportCheck
         w.WriteLine("</section>");
     }
 
-    private static void Row(TextWriter w, string label, LoadReduction? red, Func<LoadReduction, double> noise, Func<LoadReduction, double> momentNoise)
+    private static void Row(TextWriter w, string label, LoadReduction? red)
     {
         if (red is null)
         {
             w.WriteLine($"<tr><th>{label}</th><td colspan=\"4\">absent: no {label} case or combination of this name</td></tr>");
             return;
         }
-        w.WriteLine($"<tr><th>{label}</th><td class=\"num\">{NumberText.Readable(red.Force, noise(red))}</td><td class=\"num\">{NumberText.Readable(red.Moment, momentNoise(red))}</td>"
+        (double noise, double momentNoise) = CheckWords.Noise(red);
+        w.WriteLine($"<tr><th>{label}</th><td class=\"num\">{NumberText.Readable(red.Force, noise)}</td><td class=\"num\">{NumberText.Readable(red.Moment, momentNoise)}</td>"
             + $"<td class=\"num\">{NumberText.Readable(red.GrossForce)}</td><td class=\"num\">{red.ItemCount.ToString(CultureInfo.InvariantCulture)}</td></tr>");
     }
 }

@@ -42,7 +42,7 @@ public static class HtmlReportReduce
             string axis = wr.AxisPoint is { } a ? NumberText.Readable(a, WrenchAnalysis.RoundingThreshold * r.LengthScale) : "—";
             string pitch = wr.Kind == SystemKind.Wrench ? NumberText.Readable(wr.Pitch!.Value) : "—";
             w.WriteLine($"<tr data-name=\"{HtmlText.Escape(e.Name)}\"><td><a href=\"#entry-{index}\">{HtmlText.Escape(e.Name)}</a></td><td>{HtmlText.Escape(kind)}</td>"
-                + $"<td class=\"num\">{NumberText.Readable(r.Force, CheckTextRenderer.Noise(r))}</td><td class=\"num\">{NumberText.Readable(r.Moment, CheckTextRenderer.MomentNoise(r))}</td>"
+                + $"<td class=\"num\">{NumberText.Readable(r.Force, CheckWords.Noise(r).Force)}</td><td class=\"num\">{NumberText.Readable(r.Moment, CheckWords.Noise(r).Moment)}</td>"
                 + $"<td class=\"num\">{NumberText.Readable(r.GrossForce)}</td><td>{HtmlText.Escape(Describe.System(wr, r.AllForcesParallel))}</td><td class=\"num\">{axis}</td><td class=\"num\">{pitch}</td></tr>");
             index++;
         }
