@@ -1,3 +1,4 @@
+using LoadDiff.Core.Equivalence;
 using LoadDiff.Core.Model;
 using LoadDiff.Core.Units;
 using LoadDiff.Formats.Tests.Support;
@@ -108,5 +109,34 @@ public sealed partial class LoadFileReaderTests
         ReadOptions copied = new ReadOptions { CsvUnits = UnitSystem.Si } with { MaxItems = 10 };
         ReadResult r = LoadFileReader.Read(path, new CollectingSink(), copied);
         Assert.True(r.Header!.LengthUnitStated);
+    }
+
+    [Fact]
+    public void NoUnits_hint_for_a_file_without_units_block_read_by_both_paths()
+    {
+        // SPEC §3: without a units block a file is read in SI (N, m, kg).
+        UnitHint hint = UnitSlipHints.NoUnits("the substitute", HeaderByBothPaths(NoUnitsFile))!;
+        Assert.Equal("no-units", hint.Code);
+        Assert.Contains("read as N, m, kg", hint.Message, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void NoUnits_no_hint_for_a_file_with_force_and_length_units_read_by_both_paths()
+    {
+        DocumentHeader h = HeaderByBothPaths("""
+            { "units": { "force": "N", "length": "m" },
+              "cases": { "dead": { "loads": [ { "id": "p", "kind": "force", "at": [1, 0, 0], "value": [0, 0, -5] } ] } } }
+            """);
+        Assert.Null(UnitSlipHints.NoUnits("the substitute", h));
+    }
+
+    [Fact]
+    public void NoUnits_hint_for_a_csv_given_directly_only_when_its_units_were_not_chosen()
+    {
+        string path = _folder.Write("anchors.csv", "id,x,y,z,fx,fy,fz\nb1,1,0,0,0,0,-2\n");
+        ReadResult plain = LoadFileReader.Read(path, new CollectingSink());
+        ReadResult chosen = LoadFileReader.Read(path, new CollectingSink(), new ReadOptions { CsvUnits = UnitSystem.Si });
+        Assert.Equal("no-units", UnitSlipHints.NoUnits("anchors.csv", plain.Header!)!.Code);
+        Assert.Null(UnitSlipHints.NoUnits("anchors.csv", chosen.Header!));
     }
 }
