@@ -53,10 +53,11 @@ public class CheckCommandTests
         CliRun run = CliProcess.Run("check", CliProcess.Fixture("tank-wall", "detailed.loads.json"),
             CliProcess.Fixture("tank-wall", "simplified-reversed.loads.json"));
         Assert.Equal(1, run.ExitCode);
-        Assert.Contains("lacks a pure couple", run.Stdout);
         // Munson et al.: the resultant γ b h²/2 = 9.81·6·16/2 = 470.88 kN; reversing the triangle moves it
-        // from h/3 to 2h/3 above the floor, a couple of 470.88 × 4/3 = 627.84 kN·m.
+        // from h/3 to 2h/3 above the floor, a couple of 470.88 × 4/3 = 627.84 kN·m, read as the resultant
+        // acting h/3 = 1.33333 m too high (+z).
         Assert.Contains("627.84", run.Stdout);
+        Assert.Contains("the substitute's resultant acts 1.33333 m too far in +z", run.Stdout);
     }
 
     [Fact]

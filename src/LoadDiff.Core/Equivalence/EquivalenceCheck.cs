@@ -74,12 +74,16 @@ public static class EquivalenceCheck
         }
 
         var warnings = new List<string>();
-        foreach (CheckSide side in new[] { original, substitute })
+        foreach ((CheckSide side, string role) in new[] { (original, "the original"), (substitute, "the substitute") })
         {
-            if (side.Header is { ForceUnitStated: false, LengthUnitStated: false })
+            if (side.Header is { } header && UnitSlipHints.NoUnits($"{role} ({side.Name})", header) is { } hint)
             {
-                warnings.Add($"no units given in {side.Name}: read as N, m, kg");
+                warnings.Add(hint.Message);
             }
+        }
+        foreach (UnitHint hint in UnitSlipHints.Find(a.AllCases().ResultAt(point), b.AllCases().ResultAt(point)))
+        {
+            warnings.Add(hint.Message);
         }
         return new CheckResult(original.Name, substitute.Name, units, point, pointDescription, tolerance, comparisons, contributors)
         {
