@@ -244,14 +244,14 @@ public static class CheckWords
             : $"{k.Id} ({kind}{parts}) |F| = {NumberText.Readable(k.Force.Length)} {r.Units.Force.Symbol} at {NumberText.Readable(k.Centroid ?? Vector3.Zero)} {r.Units.Length.Symbol}";
     }
 
-    // "+x", "−y", … when the vector lies along an axis; otherwise its unit direction.
+    // "+x", "−y", … when the vector lies within about 0.08° of an axis (the vector itself is printed beside it); otherwise its unit direction.
     private static string Direction(Vector3 v)
     {
         double n = v.Length;
         string[] names = ["x", "y", "z"];
         for (int k = 0; k < 3; k++)
         {
-            if (Math.Abs(v[k]) >= n * (1 - 1e-9))
+            if (Math.Abs(v[k]) >= n * (1 - 1e-6))
             {
                 return (v[k] > 0 ? "+" : "−") + names[k];
             }
