@@ -133,7 +133,7 @@ public class VerdictStatesTests
     // The sentences every format must carry (CheckWords, the one place they are worded).
     private const string IncompleteNote = "the substitute lacks case Q, so this combination is incomplete there";
     private const string ConflictNote = "the substitute defines 'uls' as 1.35·G + 1.35·Q; the original's factors 1.35·G + 1.5·Q were applied to both";
-    private const string UnitHint = "no units given in " + SubstituteFile + ": read as N, m, kg";
+    private const string UnitHint = "no units given in the substitute (" + SubstituteFile + "): its values were read as N, m, kg";
     private const string ShiftWords = "the substitute's resultant acts 0.3 m too far in +x"; // 1.30 − 1 (centre of parallel forces)
     private const string GateLine = "largest |ΔM| = 10 kN·m at s = 1 m; allowed 1 kN·m"; // see Gate_numbers_are_the_hand_statics
 

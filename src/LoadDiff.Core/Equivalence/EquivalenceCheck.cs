@@ -54,7 +54,7 @@ public static class EquivalenceCheck
                 notes.Add($"the substitute lacks case{(absent.Length > 1 ? "s" : "")} {string.Join(", ", absent)}, so this combination is incomplete there");
             }
             LoadCombination? own = b.Combinations.FirstOrDefault(x => x.Name == combination.Name);
-            if (own is not null && !own.Equals(combination))
+            if (own is not null && !SameFactors(own, combination))
             {
                 notes.Add($"the substitute defines '{combination.Name}' as {Factors(own)}; the original's factors {Factors(combination)} were applied to both");
             }
@@ -125,6 +125,11 @@ public static class EquivalenceCheck
 
     private static List<Contributor> Listed(ReductionSink sink, string name) =>
         sink.Contributors(name) is { } t ? [.. t.Forces.Take(ListedContributors), .. t.Couples.Take(ListedContributors)] : [];
+
+    // A combination is a map from case to factor (a JSON object is unordered): the order written is no conflict.
+    private static bool SameFactors(LoadCombination x, LoadCombination y) =>
+        x.Factors.Length == y.Factors.Length
+        && x.Factors.All(f => y.Factors.Any(g => g.Key == f.Key && g.Value.Equals(f.Value)));
 
     private static string Factors(LoadCombination c) =>
         string.Join(" + ", c.Factors.Select(f => f.Value.ToString("R", System.Globalization.CultureInfo.InvariantCulture) + "·" + f.Key));

@@ -132,7 +132,7 @@ public static class UnitSlipHints
         return (header.ForceUnitStated, header.LengthUnitStated) switch
         {
             (false, false) => new UnitHint(UnitHint.NoUnitsCode,
-                $"{whichFile} states no {(header.MassUnitStated ? "force or length unit" : "units")}: its values were read as {read}"),
+                $"no {(header.MassUnitStated ? "force or length unit" : "units")} given in {whichFile}: its values were read as {read}"),
             (true, false) => new UnitHint(UnitHint.PartialUnitsCode,
                 $"{whichFile} states a force unit but no length unit: its lengths were read as {read.Length.Symbol}"),
             (false, true) => new UnitHint(UnitHint.PartialUnitsCode,

@@ -330,7 +330,7 @@ public class UnitSlipHintsTests
         // SPEC §3: units are optional and SI (N, m, kg) by default.
         UnitHint hint = UnitSlipHints.NoUnits("the substitute", Header(false, false, false))!;
         Assert.Equal("no-units", hint.Code);
-        Assert.Equal("the substitute states no units: its values were read as N, m, kg", hint.Message);
+        Assert.Equal("no units given in the substitute: its values were read as N, m, kg", hint.Message);
         Assert.Null(hint.Factor);
     }
 
@@ -359,6 +359,6 @@ public class UnitSlipHintsTests
         var tonnes = new UnitSystem(UnitCatalog.Newton, UnitCatalog.Metre, UnitCatalog.Tonne);
         UnitHint hint = UnitSlipHints.NoUnits("the original", Header(false, false, true, tonnes))!;
         Assert.Equal("no-units", hint.Code);
-        Assert.Equal("the original states no force or length unit: its values were read as N, m, t", hint.Message);
+        Assert.Equal("no force or length unit given in the original: its values were read as N, m, t", hint.Message);
     }
 }
