@@ -41,9 +41,9 @@ public class SectionGateTests
             Assert.Contains(ExpectedLine, run.Stdout);
             Assert.Contains("Section-cut gate: FAIL", run.Stdout);
         }
-        // The gate is what fails the zero-force pair: the two files are statically equivalent.
-        CliRun zero = CliProcess.Run("check", original, substituteZero, "--sections", "x", "--section-tol", "0.05");
-        Assert.Contains("Result: EQUIVALENT", zero.Stdout);
+        // The gate is what fails the zero-force pair: without it the two files are statically equivalent (same resultant).
+        CliRun plain = CliProcess.Run("check", original, substituteZero);
+        Assert.True(plain.ExitCode == 0, plain.ToString());
         // A 60 % gate allows 0.6 × 20 = 12 kN·m ≥ 10 kN·m and passes.
         CliRun loose = CliProcess.Run("check", original, substituteZero, "--sections", "x", "--section-tol", "0.6");
         Assert.True(loose.ExitCode == 0, loose.ToString());
