@@ -77,4 +77,48 @@ public class SketchTests
             Assert.Contains(cells, c => u >= c.U && u <= c.U + c.Size && v >= c.V && v <= c.V + c.Size);
         }
     }
+
+    [Fact]
+    public void Items_of_zero_magnitude_are_neither_drawn_nor_counted_nor_widen_a_cell_grid()
+    {
+        // SPEC §4: an item whose gross magnitude is zero (a zero nodal force, a line, area or mesh of zero intensity,
+        // a zero couple or mass) is no loaded geometry.
+        LoadItem[] loaded =
+        [
+            new PointForce("P1", Vector3.Create(0, 0, 0), Vector3.Create(0, 0, -10)),
+            new PointForce("P2", Vector3.Create(2, 0, 0), Vector3.Create(0, 0, -10)),
+        ];
+        LoadItem[] zero =
+        [
+            new PointForce("Z", Vector3.Create(1000, 0, 0), Vector3.Zero),
+            new PointMass("M", Vector3.Create(-1000, 50, 0), 0, Vector3.Create(0, 0, -9.80665)),
+            new LineLoad("ZL", Vector3.Create(998, 0, 0), Vector3.Create(1000, 0, 0), Vector3.Zero, Vector3.Zero),
+            new AreaLoad("ZA", [Vector3.Create(500, 500, 0), Vector3.Create(501, 500, 0), Vector3.Create(501, 501, 0)], 0, null, Vector3.Zero, Vector3.Zero),
+            new MeshTriangle("ZT", Vector3.Create(700, 0, 0), Vector3.Create(701, 0, 0), Vector3.Create(700, 1, 0), 0, 0, 0, null),
+            new FreeCouple("ZC", Vector3.Zero),
+        ];
+        Assert.All(zero, z => Assert.False(z.IsLoaded, z.Id));
+        var plain = new SystemSketch();
+        var withZero = new SystemSketch();
+        foreach (LoadItem item in loaded)
+        {
+            plain.Add(item);
+        }
+        foreach (LoadItem item in zero.Concat(loaded).Concat(zero))
+        {
+            withZero.Add(item);
+        }
+        Assert.Equal(2, withZero.ForceCount);
+        Assert.Equal(0, withZero.LineCount + withZero.AreaCount + withZero.TriangleCount + withZero.CoupleCount);
+        Assert.Equal(["P1", "P2"], withZero.Forces.Select(f => f.Id).Order());
+        Assert.Empty(withZero.Lines);
+        Assert.Empty(withZero.Areas);
+        Assert.Empty(withZero.Triangles!);
+        Assert.Null(withZero.MeshCells(SketchView.Plan));
+        foreach (SketchView v in (SketchView[])[SketchView.Plan, SketchView.ElevationXZ, SketchView.ElevationYZ])
+        {
+            // The same cells as without the zero items: the grid did not grow towards x = ±1000.
+            Assert.Equal(plain.ForceCells(v)!.Cells(), withZero.ForceCells(v)!.Cells());
+        }
+    }
 }

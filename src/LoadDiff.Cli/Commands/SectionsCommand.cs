@@ -128,7 +128,8 @@ public static class SectionsCommand
     private static SectionComparison? Compare(SectionAxis axis, double? from, double? to, int stations,
         IReadOnlyList<WeightedItems> original, IReadOnlyList<WeightedItems> substitute)
     {
-        (double Min, double Max)? extent = SectionProfile.Extent(axis, original.Concat(substitute).SelectMany(g => g.Items));
+        // Items of zero magnitude and cases with factor 0 extend no range (SectionProfile.Extent).
+        (double Min, double Max)? extent = SectionProfile.Extent(axis, original.Concat(substitute));
         if (extent is null && (from is null || to is null))
         {
             return null;

@@ -29,6 +29,7 @@ public sealed class SketchSink : ILoadSink
     }
 
     /// <inheritdoc/>
+    /// <remarks>Items of zero magnitude are dropped by <see cref="SystemSketch.Add"/>: they are neither drawn nor widen a drawing.</remarks>
     public void Item(LoadItem item) => _current?.Add(item);
 
     /// <inheritdoc/>

@@ -40,19 +40,19 @@ public sealed class SystemSketch
     private CellGrid[]? _meshCells;
     private CellGrid[]? _forceCells;
 
-    /// <summary>Point forces and masses seen.</summary>
+    /// <summary>Point forces and masses of non-zero magnitude seen.</summary>
     public long ForceCount => _forces.Seen;
 
-    /// <summary>Couples seen.</summary>
+    /// <summary>Couples of non-zero magnitude seen.</summary>
     public long CoupleCount => _couples.Seen;
 
-    /// <summary>Line loads seen.</summary>
+    /// <summary>Line loads of non-zero intensity seen.</summary>
     public long LineCount => _lines.Seen;
 
-    /// <summary>Area loads seen.</summary>
+    /// <summary>Area loads of non-zero pressure seen.</summary>
     public long AreaCount => _areas.Seen;
 
-    /// <summary>Mesh triangles seen.</summary>
+    /// <summary>Mesh triangles of non-zero pressure seen.</summary>
     public long TriangleCount { get; private set; }
 
     /// <summary>Largest |F| of any point force or weight.</summary>
@@ -88,10 +88,17 @@ public sealed class SystemSketch
     /// <summary>Binned positions of all point forces in a view; null without point forces.</summary>
     public CellGrid? ForceCells(SketchView view) => _forceCells?[(int)view];
 
-    /// <summary>Takes one item into the sample.</summary>
+    /// <summary>
+    /// Takes one item into the sample. An item of zero magnitude (<see cref="LoadItem.IsLoaded"/> false: a zero nodal force,
+    /// a line or area of zero intensity) is no load: it is not drawn, not counted and places nothing in a cell grid.
+    /// </summary>
     public void Add(LoadItem item)
     {
         ArgumentNullException.ThrowIfNull(item);
+        if (!item.IsLoaded)
+        {
+            return;
+        }
         switch (item)
         {
             case PointForce f:

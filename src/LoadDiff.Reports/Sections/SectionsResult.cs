@@ -19,6 +19,9 @@ public sealed record SectionsEntry(string Name, EntryKind Kind, SectionCompariso
 public sealed record SectionsResult(
     string OriginalPath, string SubstitutePath, UnitSystem Units, SectionAxis Axis, IReadOnlyList<SectionsEntry> Entries)
 {
+    /// <summary>The section-cut gate's verdict on these entries, when <c>check --sections</c> asked for one.</summary>
+    public SectionGateVerdict? Gate { get; init; }
+
     /// <summary>What the numbers are, in one sentence.</summary>
     public const string Convention =
         "V(s) and M(s) are the resultant force and moment of every load on the negative side of the cut, (x − origin)·axis ≤ s, "
