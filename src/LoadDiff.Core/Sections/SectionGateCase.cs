@@ -20,8 +20,16 @@ public sealed record SectionGateCase(
     string Name, EntryKind Kind, double RelativeTolerance, double PeakMoment, (double Min, double Max)? PeakExtent,
     double MaxMomentDeviation, double MaxMomentDeviationAt)
 {
-    /// <summary>The allowed largest |ΔM|: <see cref="RelativeTolerance"/> × <see cref="PeakMoment"/> (force × length).</summary>
-    public double AllowedMoment => RelativeTolerance * PeakMoment;
+    /// <summary>
+    /// What rounding alone can make of a cut moment here (force × length): <see cref="Reduction.WrenchAnalysis.RoundingThreshold"/>
+    /// times the largest cut force times the largest distance of a cut point from the origin plus the station span, plus the
+    /// threshold times the largest cut moment. The allowance never falls below it, so two copies of one load set written in
+    /// different units never fail on rounding (an original whose loads sit at one station has a peak of 0).
+    /// </summary>
+    public double RoundingFloor { get; init; }
+
+    /// <summary>The allowed largest |ΔM|: <see cref="RelativeTolerance"/> × <see cref="PeakMoment"/>, at least <see cref="RoundingFloor"/> (force × length).</summary>
+    public double AllowedMoment => Math.Max(RelativeTolerance * PeakMoment, RoundingFloor);
 
     /// <summary>True when <see cref="MaxMomentDeviation"/> does not exceed <see cref="AllowedMoment"/>.</summary>
     public bool Passes => MaxMomentDeviation <= AllowedMoment;
@@ -35,7 +43,28 @@ public sealed record SectionGateCase(
         Guard.That(double.IsFinite(relativeTolerance) && relativeTolerance >= 0,
             "The relative tolerance must be a finite number of at least 0.", nameof(relativeTolerance));
         return new SectionGateCase(name, kind, relativeTolerance, comparison.OriginalPeakMomentOverExtent, comparison.OriginalExtent,
-            comparison.MaxMomentDeviation, comparison.MaxMomentDeviationAt);
+            comparison.MaxMomentDeviation, comparison.MaxMomentDeviationAt)
+        {
+            RoundingFloor = Floor(comparison),
+        };
+    }
+
+    private static double Floor(SectionComparison comparison)
+    {
+        IReadOnlyList<SectionStation> st = comparison.Stations;
+        if (st.Count == 0)
+        {
+            return 0;
+        }
+        double force = 0, moment = 0, reach = 0;
+        foreach (SectionStation x in st)
+        {
+            force = Math.Max(force, Math.Max(x.Original.Force.Length, x.Substitute.Force.Length));
+            moment = Math.Max(moment, Math.Max(x.Original.Moment.Length, x.Substitute.Moment.Length));
+            reach = Math.Max(reach, x.Original.ReferencePoint.Length);
+        }
+        double span = st[^1].S - st[0].S;
+        return Reduction.WrenchAnalysis.RoundingThreshold * ((force * (reach + span)) + moment);
     }
 
     /// <inheritdoc/>
