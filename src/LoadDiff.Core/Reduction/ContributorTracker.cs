@@ -113,6 +113,18 @@ public sealed class ContributorTracker
         {
             return;
         }
+        PriorityQueue<Ranked, (double, long)> heap = _pendingKind == LoadKind.Couple ? _couples : _forces;
+        double magnitude = (_pendingKind == LoadKind.Couple ? _pendingCouple : _pendingForce).Length;
+        if (heap.Count == _capacity && heap.TryPeek(out _, out (double Magnitude, long) least) && magnitude <= least.Magnitude)
+        {
+            // it would not be kept: build nothing
+            Truncated = true;
+            _pendingId = null;
+            _pendingForce = _pendingCouple = _pendingMoment = _pendingFirst = Vector3.Zero;
+            _pendingGross = 0;
+            _pendingParts = 0;
+            return;
+        }
         Vector3? centroid = _pendingGross > 0 ? _pendingAnchor + (_pendingFirst / _pendingGross) : null;
         // the moment about the centroid: M_c = M_anchor + (anchor − c) × F
         Vector3 momentAtCentroid = centroid is { } c ? _pendingMoment + Vector3.Cross(_pendingAnchor - c, _pendingForce) : _pendingMoment;
