@@ -37,7 +37,7 @@ public sealed class CollectedFile
     {
         ArgumentNullException.ThrowIfNull(error);
         var sink = new CollectingSink();
-        ReadResult result = LoadFileReader.Read(path, sink, new ReadOptions { TargetUnits = targetUnits });
+        ReadResult result = GitSource.ReadOperand(path, sink, new ReadOptions { TargetUnits = targetUnits }, out _);
         foreach (Diagnostic d in result.Diagnostics)
         {
             error.WriteLine(d.ToString());

@@ -63,5 +63,9 @@ public static class LoadDiffApp
             error.WriteLine("loaddiff: " + e.Message);
             return ExitCodes.InputError;
         }
+        finally
+        {
+            GitSource.DisposeAll();
+        }
     }
 }

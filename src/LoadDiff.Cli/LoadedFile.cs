@@ -22,6 +22,9 @@ public sealed class LoadedFile
     /// <summary>The CSV files the load description referenced, in the order they were opened.</summary>
     public IReadOnlyList<(string FullPath, string Display)> ReferencedFiles { get; }
 
+    /// <summary>Where the file's bytes can be read again (for a <c>REV:PATH</c> operand, its copy from that revision).</summary>
+    public string ContentPath { get; private init; } = "";
+
     /// <summary>The file as the user named it.</summary>
     public string Path { get; }
 
@@ -47,6 +50,7 @@ public sealed class LoadedFile
         var sink = new ReductionSink(topContributors: topContributors);
         var referenced = new List<(string, string)>();
         ReadResult result;
+        string contentPath;
         using (ProgressDisplay? progress = ProgressDisplay.ForStandardError(error, path))
         {
             // A sketch needs the items one by one; the reduction alone takes reduced blocks of large CSV files.
@@ -58,7 +62,7 @@ public sealed class LoadedFile
                 BytesRead = progress is null ? null : progress.AddBytes,
                 ReferencedFileOpened = (full, display) => referenced.Add((full, display)),
             };
-            result = LoadFileReader.Read(path, target, chosen);
+            result = GitSource.ReadOperand(path, target, chosen, out contentPath);
         }
         foreach (Diagnostic d in result.Diagnostics)
         {
@@ -68,7 +72,7 @@ public sealed class LoadedFile
         {
             throw new InputFailureException(path);
         }
-        return new LoadedFile(path, sink, result.Header, referenced);
+        return new LoadedFile(path, sink, result.Header, referenced) { ContentPath = contentPath };
     }
 
     /// <summary>This file as one side of a check.</summary>

@@ -96,7 +96,7 @@ public static class ReportFile
         var inputs = new List<ReportInput>();
         foreach ((string role, LoadedFile f) in files)
         {
-            inputs.Add(Fingerprint(role, f.Path, f.Path == "-" ? null : f.Path));
+            inputs.Add(Fingerprint(role, f.Path, f.Path == "-" ? null : f.ContentPath));
             foreach ((string full, string display) in f.ReferencedFiles.DistinctBy(r => r.FullPath))
             {
                 inputs.Add(Fingerprint($"referenced by the {role}", display, full));

@@ -62,4 +62,11 @@ public sealed record ReadOptions
     /// opened; for reports that list (and hash) every input. Null for none.
     /// </summary>
     public Action<string, string>? ReferencedFileOpened { get; init; }
+
+    /// <summary>
+    /// Called with the full path of every file a load description references, before the reader checks that it exists:
+    /// a caller reading a document from somewhere other than the working tree (a git revision) creates the file there
+    /// from the same source, so no referenced file is ever read from elsewhere. Null for plain files.
+    /// </summary>
+    public Action<string>? PrepareReferencedFile { get; init; }
 }

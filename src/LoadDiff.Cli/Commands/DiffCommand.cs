@@ -74,7 +74,11 @@ public static class DiffCommand
         return command;
     }
 
-    private sealed record Source(string Name, byte[]? Bytes, string BaseDirectory);
+    private sealed record Source(string Name, byte[]? Bytes, string BaseDirectory)
+    {
+        /// <summary>The revision a <c>REV:PATH</c> operand was read from; its referenced files come from it too.</summary>
+        public GitSource? Revision { get; init; }
+    }
 
     private static Source Open(string operand, string? baseDirectory)
     {
@@ -91,8 +95,9 @@ public static class DiffCommand
         }
         if (GitSource.IsRevisionPath(operand))
         {
-            var (bytes, dir) = GitSource.Show(operand);
-            return new Source(operand, bytes, baseDirectory ?? dir);
+            // the document and every file it references are read from that revision, never from the working tree
+            GitSource g = GitSource.Open(operand);
+            return new Source(operand, g.Bytes(), baseDirectory ?? g.BaseDirectory) { Revision = g };
         }
         return new Source(operand, null, baseDirectory ?? Path.GetDirectoryName(Path.GetFullPath(operand))!);
     }
@@ -117,7 +122,8 @@ public static class DiffCommand
 
     private static SourceReadResult Read(Source s, UnitSystem? target, TextWriter error)
     {
-        var options = new ReadOptions { TargetUnits = target };
+        var plain = new ReadOptions { TargetUnits = target };
+        ReadOptions options = s.Revision?.Options(plain) ?? plain;
         SourceReadResult r = s.Bytes is null ? LoadDocumentReader.Read(s.Name, options) : LoadDocumentReader.ReadBytes(s.Bytes, s.Name, s.BaseDirectory, options);
         FmtCommand.Report(r, error);
         return r;

@@ -372,6 +372,7 @@ internal sealed class LoadJsonWalker
             throw Error(node, path, Codes.OutsideFolder,
                 $"'{rel}' lies outside the folder of the load file; only relative paths inside it are read (--allow-outside permits others)");
         }
+        _options.PrepareReferencedFile?.Invoke(full);
         if (!File.Exists(full))
         {
             throw Error(node, path, Codes.ReferencedFileMissing, $"referenced file '{rel}' does not exist");
