@@ -45,6 +45,20 @@ public class RoundingNoiseTests
     }
 
     [Fact]
+    public void Of_bothSystemsMirroredThroughTheOrigin_sameNoise()
+    {
+        // Negating every position: the union box becomes (−4,−6,−12)…(2,3,6), whose far corner from the origin is now
+        // its Min (|min| = 14, |max| = 7); diagonal and reach are unchanged (21 + 14 = 35), so the noise is as before.
+        static LoadItem Mirror(LoadItem i) => Systems.Map(i, v => -v, Vector3.Zero);
+        LoadReduction a = Reduce.About(V(0, 0, 0), new PointForce("p", V(2, 3, 6), V(1, 2, 2)), new PointForce("q", V(-2, -3, -6), V(2, 3, 6)), new FreeCouple("c", V(1, 4, 8)));
+        LoadReduction b = Reduce.About(V(0, 0, 0), Mirror(new PointForce("r", V(4, 6, 12), V(2, 6, 9))), new FreeCouple("c", V(1, 2, 2)));
+        Assert.Equal(new Box(V(-4, -6, -12), V(2, 3, 6)), Box.Union(a.Bounds, b.Bounds));
+        RoundingNoise n = RoundingNoise.Of(a, b);
+        Assert.Equal(1e-12 * 11, n.Force);
+        Assert.Equal(1e-12 * 388, n.Moment); // b: 3 + 11·35
+    }
+
+    [Fact]
     public void Of_boxOfOneSystemOnly_isTheUnion()
     {
         // b alone has a box; a is couples only (no box): reach = 0 + |(4,6,12)| = 14; a: 9, b: 3 + 11·14 = 157.
