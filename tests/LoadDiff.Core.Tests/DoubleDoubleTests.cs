@@ -3,7 +3,7 @@ using LoadDiff.Core.Tests.Support;
 
 namespace LoadDiff.Core.Tests;
 
-public class DoubleDoubleTests
+public partial class DoubleDoubleTests
 {
     // Doubles spread over many binades, both signs, so that neither the sum nor the product overflows or underflows.
     private static Gen<double> Spread(int maxExponent) =>

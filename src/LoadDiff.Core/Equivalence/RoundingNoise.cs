@@ -48,5 +48,5 @@ public sealed record RoundingNoise(double Force, double Moment)
     public bool IsForceNoise(double force) => Math.Abs(force) <= Force;
 
     /// <inheritdoc/>
-    public override string ToString() => $"noise: force {Force:R}, moment {Moment:R}";
+    public override string ToString() => string.Create(System.Globalization.CultureInfo.InvariantCulture, $"noise: force {Force:R}, moment {Moment:R}");
 }

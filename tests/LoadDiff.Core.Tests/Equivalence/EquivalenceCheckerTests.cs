@@ -7,7 +7,7 @@ using LoadDiff.Core.Reduction;
 
 namespace LoadDiff.Core.Tests.Equivalence;
 
-public class EquivalenceCheckerTests
+public partial class EquivalenceCheckerTests
 {
     private static readonly ToleranceSpec Tight = ToleranceSpec.Create(1e-9, 0, 0);
 
