@@ -120,7 +120,7 @@ public static class DocumentDiffer
         }
         if (a.Cases.Concat(b.Cases).Any(c => c.Items.Any(i => i.Kind is "mesh" or "forces")))
         {
-            notes.Add("mesh and forces items are compared by their file references, and the CSV data they reference by the reduced resultant of those data.");
+            notes.Add("mesh and forces items are compared by their file references, and the CSV data they reference by their rows (in any order) and the reduced resultant of those data; when the units differ, by the resultant only.");
         }
         return new DocumentDiff(oldName, newName, a.Units, bAsWritten.Units, point, pointDescription, settings, items, resultants,
             CanonicalWriter.Write(a), CanonicalWriter.Write(b), notes);
@@ -168,6 +168,11 @@ public static class DocumentDiffer
                 string why = x.Kind is "mesh" or "forces" ? "referenced data" : x.Kind == "mass" ? "weight (gravity changed)" : "load";
                 fields.Add(new FieldChange(why, "R = " + SourceText.Vector(fa), "R = " + SourceText.Vector(fb), ctx.Old.Units.Force.Symbol));
             }
+            else if (fields.Count == 0 && x.Kind is "mesh" or "forces" && !ctx.UnitsConverted && ia[i].RowDigest != ib[j].RowDigest)
+            {
+                // the rows differ although the resultants agree (loads moved without changing R or M): never "no differences"
+                fields.Add(new FieldChange("referenced data", RowsText(ia[i]), RowsText(ib[j]) + "; rows differ, the resultant is unchanged", ""));
+            }
             if (fields.Count > 0)
             {
                 list.Add(new ItemChange(name, ia[i].Key, x.Id is null, y.Kind, ChangeKind.Changed, fields, fb - fa, mb - ma));
@@ -195,6 +200,9 @@ public static class DocumentDiffer
     private static string Factors(LoadCombination c) =>
         string.Join(" + ", c.Factors.Select(f => SourceText.Number(f.Value) + "·" + f.Key));
 
+    private static string RowsText(ItemResultant r) =>
+        r.RowDigest.Count.ToString(CultureInfo.InvariantCulture) + (r.RowDigest.Count == 1 ? " row" : " rows");
+
     private static string Count(SourceCase c) => c.Items.Length.ToString(CultureInfo.InvariantCulture) + (c.Items.Length == 1 ? " item" : " items");
 
     private static string? Q(string? s) => s is null ? null : SourceText.Quoted(s);
@@ -206,6 +214,8 @@ public static class DocumentDiffer
         public LoadDocument Old { get; } = old;
 
         public LoadDocument New { get; } = @new;
+
+        public bool UnitsConverted => converted;
 
         public bool Same(double x, double y) =>
             x == y || (converted && Math.Abs(x - y) <= ConvertedUlps * MachineEpsilon * Math.Max(Math.Abs(x), Math.Abs(y)));

@@ -1,0 +1,50 @@
+using System.Text.Json;
+using LoadDiff.Cli.Tests.Support;
+
+namespace LoadDiff.Cli.Tests;
+
+/// <summary>
+/// A referenced forces CSV whose rows moved while its resultant stayed the same is a difference: −10 kN at x = 0 and
+/// x = 2 became −10 kN at x = 1 twice (R = −20 kN and M about x = 1 are zero change, by hand), yet the cut shear at
+/// x = 0.5 goes from −10 to 0 kN (statics of the free body behind the cut).
+/// </summary>
+public class DiffReferencedRowsTests
+{
+    private const string Document = """
+        { "format": "loaddiff/1", "units": { "force": "kN", "length": "m" },
+          "cases": { "w": { "loads": [ { "id": "roof", "kind": "forces", "file": "nodes.csv" } ] } } }
+        """;
+
+    private static string Version(TempFolder dir, string name, string rows)
+    {
+        Directory.CreateDirectory(Path.Combine(dir.Path, name));
+        dir.Write(name + "/nodes.csv", "id,x,y,z,fx,fy,fz\n" + rows);
+        return dir.Write(name + "/m.loads.json", Document);
+    }
+
+    [Fact]
+    public void Rows_moved_with_the_same_resultant_are_reported_and_exit_1()
+    {
+        using var dir = new TempFolder();
+        string a = Version(dir, "old", "n1,0,0,0,0,0,-10\nn2,2,0,0,0,0,-10\n");
+        string b = Version(dir, "new", "n1,1,0,0,0,0,-10\nn2,1,0,0,0,0,-10\n");
+        CliRun text = CliProcess.Run("diff", a, b);
+        Assert.True(text.ExitCode == 1, text.ToString());
+        Assert.Contains("rows differ, the resultant is unchanged", text.Stdout);
+        Assert.DoesNotContain("No differences", text.Stdout);
+        CliRun json = CliProcess.Run("diff", a, b, "--format", "json");
+        using JsonDocument doc = JsonDocument.Parse(json.Stdout);
+        Assert.True(doc.RootElement.GetProperty("different").GetBoolean());
+    }
+
+    [Fact]
+    public void The_same_rows_in_another_order_are_no_difference()
+    {
+        using var dir = new TempFolder();
+        string a = Version(dir, "old", "n1,0,0,0,0,0,-10\nn2,2,0,0,0,0,-10\n");
+        string b = Version(dir, "new", "n2,2,0,0,0,0,-10\nn1,0,0,0,0,0,-10\n");
+        CliRun run = CliProcess.Run("diff", a, b);
+        Assert.True(run.ExitCode == 0, run.ToString());
+        Assert.Contains("No differences", run.Stdout);
+    }
+}
