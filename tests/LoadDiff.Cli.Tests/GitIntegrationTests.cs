@@ -1,4 +1,3 @@
-using System.Diagnostics;
 using LoadDiff.Cli.Tests.Support;
 
 namespace LoadDiff.Cli.Tests;
@@ -26,32 +25,9 @@ public sealed class GitIntegrationTests : IDisposable
 
     public void Dispose() => _repo.Dispose();
 
-    private (int Exit, string Out, string Err) GitRun(params string[] args)
-    {
-        var psi = new ProcessStartInfo("git") { WorkingDirectory = _repo.Path, RedirectStandardOutput = true, RedirectStandardError = true, UseShellExecute = false };
-        foreach (string a in args)
-        {
-            psi.ArgumentList.Add(a);
-        }
-        // no dependence on the machine's or user's git configuration
-        psi.Environment["GIT_CONFIG_NOSYSTEM"] = "1";
-        psi.Environment["GIT_CONFIG_GLOBAL"] = "/dev/null";
-        psi.Environment["HOME"] = _repo.Path;
-        psi.Environment["GIT_PAGER"] = "cat";
-        psi.Environment["NO_COLOR"] = "1";
-        using var p = Process.Start(psi)!;
-        Task<string> err = p.StandardError.ReadToEndAsync();
-        string output = p.StandardOutput.ReadToEnd();
-        p.WaitForExit();
-        return (p.ExitCode, output, err.Result);
-    }
+    private (int Exit, string Out, string Err) GitRun(params string[] args) => GitProcess.Run(_repo.Path, args);
 
-    private string Git(params string[] args)
-    {
-        var (exit, output, err) = GitRun(args);
-        Assert.True(exit == 0, $"git {string.Join(' ', args)} exited {exit}: {err}");
-        return output;
-    }
+    private string Git(params string[] args) => GitProcess.Ok(_repo.Path, args);
 
     [Fact]
     public void Git_diff_shows_the_semantic_diff_through_the_external_driver()

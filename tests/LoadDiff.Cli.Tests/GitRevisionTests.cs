@@ -1,4 +1,3 @@
-using System.Diagnostics;
 using System.Text.Json;
 using LoadDiff.Cli.Tests.Support;
 
@@ -40,23 +39,7 @@ public sealed class GitRevisionTests : IDisposable
     private void Nodes(double fz2) =>
         _repo.Write("models/nodes.csv", $"id,x,y,z,fx,fy,fz\nn1,0,0,0,0,0,-10\nn2,2,0,0,0,0,{fz2.ToString(System.Globalization.CultureInfo.InvariantCulture)}\n");
 
-    private string Git(params string[] args)
-    {
-        var psi = new ProcessStartInfo("git") { WorkingDirectory = _repo.Path, RedirectStandardOutput = true, RedirectStandardError = true, UseShellExecute = false };
-        foreach (string a in args)
-        {
-            psi.ArgumentList.Add(a);
-        }
-        psi.Environment["GIT_CONFIG_NOSYSTEM"] = "1";
-        psi.Environment["GIT_CONFIG_GLOBAL"] = "/dev/null";
-        psi.Environment["HOME"] = _repo.Path;
-        using var p = Process.Start(psi)!;
-        Task<string> err = p.StandardError.ReadToEndAsync();
-        string output = p.StandardOutput.ReadToEnd();
-        p.WaitForExit();
-        Assert.True(p.ExitCode == 0, $"git {string.Join(' ', args)} exited {p.ExitCode}: {err.Result}");
-        return output;
-    }
+    private string Git(params string[] args) => GitProcess.Ok(_repo.Path, args);
 
     private static double Fz(JsonElement system) => system.GetProperty("force")[2].GetDouble();
 

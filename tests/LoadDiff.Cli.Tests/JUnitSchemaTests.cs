@@ -8,28 +8,7 @@ namespace LoadDiff.Cli.Tests;
 /// <summary><c>check --format junit</c> against the common JUnit structure (Schemas/junit.xsd, written from memory), validated with System.Xml.Schema.</summary>
 public class JUnitSchemaTests
 {
-    private static XmlSchemaSet Schema()
-    {
-        var set = new XmlSchemaSet { XmlResolver = null };
-        using var reader = XmlReader.Create(Path.Combine(CliProcess.RepoRoot, "tests", "LoadDiff.Cli.Tests", "Schemas", "junit.xsd"),
-            new XmlReaderSettings { DtdProcessing = DtdProcessing.Prohibit, XmlResolver = null });
-        set.Add(null, reader);
-        set.Compile();
-        return set;
-    }
-
-    private static List<string> Validate(string xml)
-    {
-        var errors = new List<string>();
-        var settings = new XmlReaderSettings { ValidationType = ValidationType.Schema, Schemas = Schema(), XmlResolver = null, DtdProcessing = DtdProcessing.Prohibit };
-        settings.ValidationFlags |= XmlSchemaValidationFlags.ReportValidationWarnings;
-        settings.ValidationEventHandler += (_, e) => errors.Add($"{e.Severity}: {e.Message} (line {e.Exception?.LineNumber})");
-        using var reader = XmlReader.Create(new StringReader(xml), settings);
-        while (reader.Read())
-        {
-        }
-        return errors;
-    }
+    private static List<string> Validate(string xml) => JUnitSchema.Errors(xml);
 
     [Fact]
     public void Failing_check_writes_junit_that_the_schema_accepts_with_one_testcase_per_case()

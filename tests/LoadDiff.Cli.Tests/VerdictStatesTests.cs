@@ -286,29 +286,7 @@ public class VerdictStatesTests
         }
     }
 
-    private static XmlSchemaSet JUnitSchema()
-    {
-        // The same schema and settings as JUnitSchemaTests (Schemas/junit.xsd, the common structure, written from memory).
-        var set = new XmlSchemaSet { XmlResolver = null };
-        using var reader = XmlReader.Create(Path.Combine(CliProcess.RepoRoot, "tests", "LoadDiff.Cli.Tests", "Schemas", "junit.xsd"),
-            new XmlReaderSettings { DtdProcessing = DtdProcessing.Prohibit, XmlResolver = null });
-        set.Add(null, reader);
-        set.Compile();
-        return set;
-    }
-
-    private static List<string> SchemaErrors(string xml)
-    {
-        var errors = new List<string>();
-        var settings = new XmlReaderSettings { ValidationType = ValidationType.Schema, Schemas = JUnitSchema(), XmlResolver = null, DtdProcessing = DtdProcessing.Prohibit };
-        settings.ValidationFlags |= XmlSchemaValidationFlags.ReportValidationWarnings;
-        settings.ValidationEventHandler += (_, e) => errors.Add($"{e.Severity}: {e.Message} (line {e.Exception?.LineNumber})");
-        using var reader = XmlReader.Create(new StringReader(xml), settings);
-        while (reader.Read())
-        {
-        }
-        return errors;
-    }
+    private static List<string> SchemaErrors(string xml) => JUnitSchema.Errors(xml);
 
     private static XElement TestCase(XDocument doc, string classname, string name) =>
         doc.Descendants("testcase").Single(c => (string?)c.Attribute("classname") == classname && (string?)c.Attribute("name") == name);

@@ -20,6 +20,10 @@ public sealed record AppliedTolerance(
     /// <summary>True when rel·G_M set the moment allowance.</summary>
     public bool MomentGovernedByRelative => MomentGovernedBy == AllowanceSource.Relative;
 
+    /// <inheritdoc/>
+    public override string ToString() => string.Create(System.Globalization.CultureInfo.InvariantCulture,
+        $"allowed |ΔR| {Force:R} ({ForceGovernedBy}), |ΔM| {Moment:R} ({MomentGovernedBy}); G_F {GrossForce:R}, G_M {GrossMoment:R}, D {Diagonal:R}{(DiagonalStated ? " (stated)" : "")}");
+
     /// <summary>The larger of the three parts, and which one it was (ties go to the user's parts, absolute first).</summary>
     internal static (double Value, AllowanceSource Source) Govern(double absolute, double relative, double rounding)
     {

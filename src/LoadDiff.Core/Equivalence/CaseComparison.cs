@@ -33,6 +33,9 @@ public sealed record CaseComparison(
     /// <summary>How the residual reads against the tolerance, and the items that account for it; null when the case is in one file only.</summary>
     public ResidualExplanation? Explanation { get; init; }
 
+    /// <inheritdoc/>
+    public override string ToString() => $"{Kind} {Name}: {(Equivalent ? "equivalent" : "not equivalent")}{(Presence == OnlyIn.Both ? "" : $" (only in {Presence})")}";
+
     /// <summary>True when |ΔR| is within its tolerance.</summary>
     public bool ForcePasses => Residual is not null && Tolerance is not null && Residual.ForceNorm <= Tolerance.Force;
 

@@ -10,6 +10,10 @@ namespace LoadDiff.Core.Equivalence;
 /// <param name="AtBoxCentre">ΔR and ΔM about the centre of the box (the reference point when there is no geometry).</param>
 public sealed record ResidualAnalysis(ForceCoupleSystem System, double WorstMomentNorm, Vector3 WorstCorner, WrenchAnalysis Wrench, ForceCoupleSystem AtBoxCentre)
 {
+    /// <inheritdoc/>
+    public override string ToString() => string.Create(global::System.Globalization.CultureInfo.InvariantCulture,
+        $"residual {System}; worst |ΔM| {WorstMomentNorm:R} at {WorstCorner}");
+
     /// <summary>|ΔR|.</summary>
     public double ForceNorm => System.Force.Length;
 

@@ -38,6 +38,9 @@ public sealed record ResidualExplanation(
     ResidualReading Reading, Vector3 Force, Vector3 Couple, Vector3 Point, Vector3? Shift, Vector3? AxisDirection, double? AxisDistance,
     IReadOnlyList<SuspectItem> Suspects, bool SearchBounded)
 {
+    /// <inheritdoc/>
+    public override string ToString() => $"{Reading}: missing force {Force}, couple {Couple} at {Point}; {Suspects.Count} suspect(s)";
+
     /// <summary>Reads the residual of a comparison of two present cases; <paramref name="candidates"/> are searched for suspects.</summary>
     public static ResidualExplanation For(CaseComparison c, IReadOnlyList<ResidualSuspects.Candidate> candidates, bool searchBounded)
     {

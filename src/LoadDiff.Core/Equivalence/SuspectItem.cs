@@ -19,4 +19,9 @@ public enum SuspectKind
 /// <param name="Case">For a combination, the component case the item belongs to; null for a case.</param>
 /// <param name="Factor">The item's load factor in the combination (1 for a case).</param>
 /// <param name="Kind">What would have gone wrong.</param>
-public sealed record SuspectItem(string Id, bool InOriginal, string? Case, double Factor, SuspectKind Kind);
+public sealed record SuspectItem(string Id, bool InOriginal, string? Case, double Factor, SuspectKind Kind)
+{
+    /// <inheritdoc/>
+    public override string ToString() => string.Create(System.Globalization.CultureInfo.InvariantCulture,
+        $"{(InOriginal ? "original" : "substitute")} item {Id}{(Case is null ? "" : $" of case {Case} (×{Factor:R})")}: {Kind}");
+}
