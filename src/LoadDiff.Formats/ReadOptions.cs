@@ -69,4 +69,12 @@ public sealed record ReadOptions
     /// from the same source, so no referenced file is ever read from elsewhere. Null for plain files.
     /// </summary>
     public Action<string>? PrepareReferencedFile { get; init; }
+
+    /// <summary>
+    /// When set, a mesh or forces item whose referenced file does not exist is kept without its data (it carries no
+    /// load) instead of failing, and this is called with the file's path as the document writes it. For a caller that
+    /// has the document only (git's textconv gets a temporary copy of it) and says which data are missing. A name
+    /// outside the folder or an empty one is still an error. Null (the default): a missing file is an error (LD051).
+    /// </summary>
+    public Action<string>? MissingReferencedFile { get; init; }
 }

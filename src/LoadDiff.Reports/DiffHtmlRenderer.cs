@@ -69,7 +69,7 @@ public static class DiffHtmlRenderer
         IReadOnlyList<ListingLine> lines = ListingDiff.Lines(d.OldListing, d.NewListing);
         if (lines.Count > 0)
         {
-            w.WriteLine("<h2>Canonical listing diff</h2><pre class=\"listing\">");
+            w.WriteLine("<h2>Canonical listing diff</h2>" + (d.ListingSignificantDigits is null ? "" : "<p>" + H(DiffWords.ListingBasis(d)) + "</p>") + "<pre class=\"listing\">");
             foreach (ListingLine l in lines)
             {
                 string cls = l.Tag switch { '+' => "add", '-' => "del", '@' => "hunk", _ => "ctx" };

@@ -91,6 +91,14 @@ public static class DiffJsonWriter
             text.Append(l.Tag == '@' ? l.Text : l.Tag + l.Text).Append('\n');
         }
         w.WriteString("listing_diff", text.ToString());
+        if (d.ListingSignificantDigits is { } digits)
+        {
+            w.WriteNumber("listing_significant_digits", digits);
+        }
+        else
+        {
+            w.WriteNull("listing_significant_digits");
+        }
         w.WriteString("caution", DiffWords.Caution);
         w.WriteEndObject();
     }

@@ -64,7 +64,7 @@ public static class DiffMarkdownRenderer
         if (lines.Count > 0)
         {
             w.WriteLine();
-            w.WriteLine("<details><summary>Canonical listing diff</summary>");
+            w.WriteLine("<details><summary>Canonical listing diff" + (d.ListingSignificantDigits is null ? "" : " (" + Esc(DiffWords.ListingBasis(d)) + ")") + "</summary>");
             w.WriteLine();
             w.WriteLine("````diff");
             foreach (ListingLine l in lines)

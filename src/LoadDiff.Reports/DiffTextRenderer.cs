@@ -74,11 +74,12 @@ public static class DiffTextRenderer
         w.WriteLine();
         if (lines.Count == 0)
         {
-            w.WriteLine("Canonical listings: identical.");
+            w.WriteLine(d.ListingSignificantDigits is null ? "Canonical listings: identical." : $"Canonical listings identical, {DiffWords.ListingBasis(d)}.");
         }
         else
         {
             w.WriteLine($"Canonical listings (loaddiff fmt), {ListingDiff.ContextLines} lines of context"
+                + (d.ListingSignificantDigits is null ? "" : "; " + DiffWords.ListingBasis(d))
                 + (d.HasDifferences ? "" : "; they differ only in the order of points, cases, items or factors, which is not a difference"));
             w.WriteLine(Paint("--- " + d.OldName, Red));
             w.WriteLine(Paint("+++ " + d.NewName, Green));

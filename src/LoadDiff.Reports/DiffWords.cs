@@ -32,6 +32,18 @@ public static class DiffWords
         return $"Differences: {ch} item{S(ch)} changed, {add} added, {rem} removed; {d.Settings.Count} document setting{S(d.Settings.Count)} changed.";
     }
 
+    /// <summary>
+    /// What the listing diff compares: the exact canonical listings, or, when the units differ, both in the old
+    /// version's units with numbers rounded to <see cref="DocumentDiff.ListingSignificantDigits"/> significant digits.
+    /// </summary>
+    public static string ListingBasis(DocumentDiff d)
+    {
+        ArgumentNullException.ThrowIfNull(d);
+        return d.ListingSignificantDigits is { } digits
+            ? $"both in the units of {d.OldName} ({d.Units}), {d.NewName} converted with the exact NIST SP 811 factors, numbers rounded to {digits.ToString(System.Globalization.CultureInfo.InvariantCulture)} significant digits"
+            : "exact";
+    }
+
     /// <summary>The point moments are taken about, with how it was chosen.</summary>
     public static string Point(DocumentDiff d)
     {

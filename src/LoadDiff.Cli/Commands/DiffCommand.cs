@@ -2,6 +2,8 @@ using System.CommandLine;
 using System.Text;
 using LoadDiff.Core;
 using LoadDiff.Core.Diff;
+using LoadDiff.Core.Equivalence;
+using LoadDiff.Core.Reduction;
 using LoadDiff.Core.Units;
 using LoadDiff.Formats;
 using LoadDiff.Formats.Source;
@@ -224,31 +226,84 @@ public static class DiffCommand
         return ExitCodes.Success;
     }
 
-    // git: textconv gets one file (often a temporary copy of a blob) and diffs whatever this prints
+    /// <summary>Significant digits of the resultant lines <c>--textconv</c> prints (rounding noise stays below them, a change of 1e-9 relative shows).</summary>
+    public const int TextConvDigits = 12;
+
+    // Diagnostics and file names in textconv output: git hands over a temporary copy under a random name, and the
+    // output must depend on the content alone (no directory part, so referenced files show as the document writes them).
+    private const string TextConvName = "this-document";
+
+    // git: textconv gets one file (often a temporary copy of a blob, elsewhere than the repository) and diffs whatever
+    // this prints, so the output depends only on the content: no path, and numbers that rounding cannot change.
     private static int TextConv(string file, TextWriter output, TextWriter error)
     {
         byte[] bytes = File.Exists(file) ? File.ReadAllBytes(file) : throw new UsageException($"'{file}': file not found");
-        SourceReadResult r = LoadDocumentReader.ReadBytes(bytes, file, Path.GetDirectoryName(Path.GetFullPath(file))!);
+        var absent = new HashSet<string>(StringComparer.Ordinal);
+        var options = new ReadOptions { MissingReferencedFile = rel => absent.Add(rel) };
+        SourceReadResult r = LoadDocumentReader.ReadBytes(bytes, TextConvName, Path.GetDirectoryName(Path.GetFullPath(file))!, options);
         if (!r.Succeeded)
         {
-            // not readable as a load description (a referenced CSV beside a temporary copy, say): show it as it is
+            // not readable as a load description: show it as it is, with the reason
             output.Write(Encoding.UTF8.GetString(bytes));
             output.WriteLine($"// loaddiff: {r.Error}");
             return ExitCodes.Success;
         }
-        output.Write(CanonicalWriter.Write(r.Document!));
-        string f = r.Document!.Units.Force.Symbol, m = r.Document.Units.MomentSymbol;
-        output.WriteLine($"// resultants about the origin ({f}, {m}; loaddiff)");
+        LoadDocument doc = r.Document!;
+        output.Write(CanonicalWriter.Write(doc));
+        string f = doc.Units.Force.Symbol, m = doc.Units.MomentSymbol;
+        output.WriteLine($"// resultants about the origin ({f}, {m}; {TextConvDigits} significant digits, rounding noise printed as 0; loaddiff)");
+
+        // which cases hold data of a referenced file that is not beside this copy, in document order
+        var needs = new Dictionary<string, List<string>>(StringComparer.Ordinal);
+        var missing = new List<string>();
+        foreach (SourceCase c in doc.Cases)
+        {
+            foreach (SourceItem item in c.Items)
+            {
+                foreach (SourceField field in item.Fields)
+                {
+                    if (item.Kind is "mesh" or "forces" && field.Value is TextValue { Text: var rel } && field.Name is "file" or "vertices" or "triangles" && absent.Contains(rel))
+                    {
+                        if (!missing.Contains(rel))
+                        {
+                            missing.Add(rel);
+                        }
+                        List<string> list = needs.TryGetValue(c.Name, out var l) ? l : needs[c.Name] = [];
+                        if (!list.Contains(rel))
+                        {
+                            list.Add(rel);
+                        }
+                    }
+                }
+            }
+        }
+        foreach (string rel in missing)
+        {
+            output.WriteLine($"// referenced file {SourceText.Quoted(rel)} is not beside this copy of the document (git's textconv gets the document only): "
+                + "the resultants that need it are not shown");
+        }
+        string Needs(IEnumerable<string> files) => "not shown: needs " + string.Join(", ", files.Distinct().Select(SourceText.Quoted));
         foreach (string name in r.Resultants!.Cases.CaseNames)
         {
-            var red = r.Resultants.Cases.Cases[name].ResultAt(Vector3.Zero);
-            output.WriteLine($"// case {name}: R = {SourceText.Vector(red.Force)} M = {SourceText.Vector(red.Moment)}");
+            string line = needs.TryGetValue(name, out var files) ? Needs(files)
+                : Resultant(r.Resultants.Cases.Cases[name].ResultAt(Vector3.Zero));
+            output.WriteLine($"// case {name}: {line}");
         }
         foreach (var c in r.Resultants.Cases.Combinations)
         {
-            var red = c.Combine(r.Resultants.Cases.Cases, out _).ResultAt(Vector3.Zero);
-            output.WriteLine($"// combination {c.Name}: R = {SourceText.Vector(red.Force)} M = {SourceText.Vector(red.Moment)}");
+            List<string> files = [.. c.Factors.Where(x => needs.ContainsKey(x.Key)).SelectMany(x => needs[x.Key])];
+            string line = files.Count > 0 ? Needs(files) : Resultant(c.Combine(r.Resultants.Cases.Cases, out _).ResultAt(Vector3.Zero));
+            output.WriteLine($"// combination {c.Name}: {line}");
         }
         return ExitCodes.Success;
+    }
+
+    // R and M at TextConvDigits significant digits; a component within the reduction's own rounding noise prints as 0
+    private static string Resultant(LoadReduction red)
+    {
+        var noise = RoundingNoise.Of(red);
+        string Vec(Vector3 v, double floor) => "[" + string.Join(", ", new[] { v.X, v.Y, v.Z }.Select(x =>
+            Math.Abs(x) <= floor ? "0" : SourceText.Number(SourceText.RoundToSignificant(x, TextConvDigits)))) + "]";
+        return $"R = {Vec(red.Force, noise.Force)} M = {Vec(red.Moment, noise.Moment)}";
     }
 }

@@ -23,6 +23,12 @@ public sealed record DocumentDiff(
     IReadOnlyList<SettingChange> Settings, IReadOnlyList<ItemChange> Items, IReadOnlyList<ResultantChange> Resultants,
     string OldListing, string NewListing, IReadOnlyList<string> Notes)
 {
+    /// <summary>
+    /// Null when both listings are exact canonical listings (same units); otherwise the significant digits their numbers
+    /// were rounded to after the new version was converted into <see cref="Units"/>, so conversion noise makes no changed line.
+    /// </summary>
+    public int? ListingSignificantDigits { get; init; }
+
     /// <summary>True when the new version was written in other units and converted into <see cref="Units"/>.</summary>
     public bool UnitsConverted => NewUnits != Units;
 

@@ -310,6 +310,10 @@ internal sealed class LoadJsonWalker
                 string meshId = Begin("mesh#" + ids.Count.ToString(CultureInfo.InvariantCulture));
                 Vector3? dir = Direction(item["direction"], path + ".direction");
                 var csv = new CsvLoadReader(_units, _options, li => sink.Item(li), () => ++_items);
+                if (LeftOut(item, path, "file", "vertices", "triangles"))
+                {
+                    break;
+                }
                 if (item["file"] is { } fileNode && sink is IReducedBlockSink bulkMesh)
                 {
                     (string full, string display) = ResolveReferenced(fileNode, path + ".file");
@@ -333,6 +337,10 @@ internal sealed class LoadJsonWalker
             {
                 CheckKeys(item, path, ["id", "kind", "file"]);
                 string prefix = Begin("forces#" + ids.Count.ToString(CultureInfo.InvariantCulture));
+                if (LeftOut(item, path, "file"))
+                {
+                    break;
+                }
                 if (sink is IReducedBlockSink bulk)
                 {
                     (string full, string display) = ResolveReferenced(Required(item, "file", path), path + ".file");
@@ -358,7 +366,35 @@ internal sealed class LoadJsonWalker
         return CsvLoadReader.Open(full, display, _options);
     }
 
-    private (string Full, string Display) ResolveReferenced(JsonNode node, string path)
+    // With ReadOptions.MissingReferencedFile set, an item whose referenced file does not exist keeps no data (and no
+    // load): the caller has only the document (git's textconv gets a temporary copy) and says so. Only a file that is
+    // simply absent is left out; a name outside the folder or an empty one is still an error.
+    private bool LeftOut(JsonNode item, string path, params string[] keys)
+    {
+        if (_options.MissingReferencedFile is null)
+        {
+            return false;
+        }
+        var missing = new List<string>();
+        foreach (string key in keys)
+        {
+            if (item[key] is { } node)
+            {
+                (string full, string rel) = Locate(node, path + "." + key);
+                if (!File.Exists(full))
+                {
+                    missing.Add(rel);
+                }
+            }
+        }
+        foreach (string rel in missing)
+        {
+            _options.MissingReferencedFile(rel);
+        }
+        return missing.Count > 0;
+    }
+
+    private (string Full, string Relative) Locate(JsonNode node, string path)
     {
         string rel = String(node, path);
         if (rel.Length == 0)
@@ -373,6 +409,12 @@ internal sealed class LoadJsonWalker
                 $"'{rel}' lies outside the folder of the load file; only relative paths inside it are read (--allow-outside permits others)");
         }
         _options.PrepareReferencedFile?.Invoke(full);
+        return (full, rel);
+    }
+
+    private (string Full, string Display) ResolveReferenced(JsonNode node, string path)
+    {
+        (string full, string rel) = Locate(node, path);
         if (!File.Exists(full))
         {
             throw Error(node, path, Codes.ReferencedFileMissing, $"referenced file '{rel}' does not exist");

@@ -17,6 +17,9 @@ public static class DocumentDiffer
     /// <summary>Relative agreement, in units of the double epsilon, under which converted values count as equal.</summary>
     public const double ConvertedUlps = 4;
 
+    /// <summary>Significant digits of the numbers in both listings when the units differ (the same-unit listings are exact).</summary>
+    public const int ConvertedListingDigits = 12;
+
     private const double MachineEpsilon = 2.220446049250313e-16; // 2^-52, the spacing of doubles at 1
 
     /// <summary>Compares two successfully read versions.</summary>
@@ -112,7 +115,8 @@ public static class DocumentDiffer
         if (converted)
         {
             notes.Add($"{newName} is written in {bAsWritten.Units}; it was converted into {oldName}'s units {a.Units} with the exact NIST SP 811 factors before comparing, "
-                + $"and values that agree within {ConvertedUlps.ToString(CultureInfo.InvariantCulture)} ulp after conversion count as equal. Its listing below is the converted one.");
+                + $"and values that agree within {ConvertedUlps.ToString(CultureInfo.InvariantCulture)} ulp after conversion count as equal. "
+                + $"Both listings below are in {oldName}'s units, such equal values printed as {oldName} has them, every number rounded to {ConvertedListingDigits} significant digits.");
         }
         if (a.Cases.Concat(b.Cases).Any(c => c.Items.Any(i => i.Id is null)))
         {
@@ -122,8 +126,48 @@ public static class DocumentDiffer
         {
             notes.Add("mesh and forces items are compared by their file references, and the CSV data they reference by their rows (in any order) and the reduced resultant of those data; when the units differ, by the resultant only.");
         }
+        if (!converted)
+        {
+            return new DocumentDiff(oldName, newName, a.Units, bAsWritten.Units, point, pointDescription, settings, items, resultants,
+                CanonicalWriter.Write(a), CanonicalWriter.Write(b), notes);
+        }
+        LoadDocument listed = Aligned(a, b, old.Resultants!, @new.Resultants!, ctx);
         return new DocumentDiff(oldName, newName, a.Units, bAsWritten.Units, point, pointDescription, settings, items, resultants,
-            CanonicalWriter.Write(a), CanonicalWriter.Write(b), notes);
+            CanonicalWriter.Write(a.RoundedTo(ConvertedListingDigits)), CanonicalWriter.Write(listed.RoundedTo(ConvertedListingDigits)), notes)
+        {
+            ListingSignificantDigits = ConvertedListingDigits,
+        };
+    }
+
+    // The converted new version for its listing: every value the comparison counts as equal (within ConvertedUlps) is
+    // written as the old version has it, so a value the item diff calls unchanged can never round to other digits.
+    private static LoadDocument Aligned(LoadDocument a, LoadDocument b, DocumentResultants ra, DocumentResultants rb, Context ctx)
+    {
+        SourceItem Item(SourceItem y, SourceItem? x) => x is null || x.Kind != y.Kind ? y : y with
+        {
+            Fields = [.. y.Fields.Select(f => x[f.Name] is { } u && ctx.Same(u, f.Value) ? f with { Value = u } : f)],
+        };
+        SourceCase Case(SourceCase cb)
+        {
+            SourceCase? ca = a.Cases.FirstOrDefault(c => c.Name == cb.Name);
+            if (ca is null)
+            {
+                return cb;
+            }
+            IReadOnlyList<ItemResultant> ia = ra.Items(cb.Name), ib = rb.Items(cb.Name);
+            var oldByKey = new Dictionary<string, SourceItem>(StringComparer.Ordinal);
+            for (int k = 0; k < ca.Items.Length; k++)
+            {
+                oldByKey[ia[k].Key] = ca.Items[k];
+            }
+            return cb with { Items = [.. cb.Items.Select((y, j) => Item(y, oldByKey.GetValueOrDefault(ib[j].Key)))] };
+        }
+        return b with
+        {
+            Gravity = ctx.Same(a.Gravity, b.Gravity) ? a.Gravity : b.Gravity,
+            Points = [.. b.Points.Select(p => a.Point(p.Key) is { } q && ctx.Same(q, p.Value) ? new KeyValuePair<string, Vector3>(p.Key, q) : p)],
+            Cases = [.. b.Cases.Select(Case)],
+        };
     }
 
     private static List<ItemChange> CompareCase(string name, SourceCase? ca, SourceCase? cb, DocumentResultants ra, DocumentResultants rb, Vector3 point, Context ctx)

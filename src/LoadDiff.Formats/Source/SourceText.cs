@@ -27,6 +27,23 @@ public static class SourceText
         return mantissa + "e" + (negative ? "-" : "") + (exponent.Length == 0 ? "0" : exponent);
     }
 
+    /// <summary>
+    /// The double nearest to <paramref name="value"/> rounded (correctly, from its exact binary value) to
+    /// <paramref name="significantDigits"/> significant decimal digits; <see cref="Number(double)"/> of it is the
+    /// shortest text of that rounded value (<c>2.8000000000000003</c> → <c>2.8</c> at 12 digits).
+    /// </summary>
+    public static double RoundToSignificant(double value, int significantDigits)
+    {
+        ArgumentOutOfRangeException.ThrowIfLessThan(significantDigits, 1);
+        ArgumentOutOfRangeException.ThrowIfGreaterThan(significantDigits, 17);
+        if (value == 0 || !double.IsFinite(value))
+        {
+            return value;
+        }
+        string e = value.ToString("E" + (significantDigits - 1).ToString(CultureInfo.InvariantCulture), CultureInfo.InvariantCulture);
+        return double.Parse(e, NumberStyles.Float, CultureInfo.InvariantCulture);
+    }
+
     /// <summary>A vector on one line: <c>[x, y, z]</c>.</summary>
     public static string Vector(Vector3 v) => "[" + Number(v.X) + ", " + Number(v.Y) + ", " + Number(v.Z) + "]";
 
