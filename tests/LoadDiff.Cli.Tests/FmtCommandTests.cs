@@ -111,6 +111,20 @@ public class FmtCommandTests
     }
 
     [Fact]
+    public void Every_fixture_outside_bad_is_canonical()
+    {
+        string root = CliProcess.Fixture();
+        string[] files = [.. Directory.GetFiles(root, "*.loads.json", SearchOption.AllDirectories)
+            .Where(p => !Path.GetRelativePath(root, p).StartsWith("bad" + Path.DirectorySeparatorChar, StringComparison.Ordinal))];
+        Assert.Equal(8, files.Length); // footbridge 4, tank-wall 3, equipment-skid 1
+        foreach (string file in files)
+        {
+            CliRun run = CliProcess.Run("fmt", "--check", file);
+            Assert.True(run.ExitCode == 0, file + ": " + run);
+        }
+    }
+
+    [Fact]
     public void Comments_to_notes_is_refused_with_check_or_drop_comments()
     {
         using var t = new TempFolder();
