@@ -99,6 +99,19 @@ public class NoteTests
     }
 
     [Fact]
+    public void A_bidirectional_control_in_a_note_is_written_as_an_escape_and_reads_back_the_same()
+    {
+        // U+202E RIGHT-TO-LEFT OVERRIDE and U+2066 LEFT-TO-RIGHT ISOLATE (Unicode UAX #9) would reorder the displayed line
+        const string json = """{ "cases": { "d": { "loads": [ { "kind": "couple", "value": [0, 0, 1], "note": "a\u202Eb\u2066c" } ] } } }""";
+        LoadDocument x = Read(json).Document!;
+        Assert.Equal("a\u202Eb\u2066c", x.Cases[0].Items[0].Note);
+        string text = CanonicalWriter.Write(x);
+        Assert.Contains("\"note\": \"a\\u202Eb\\u2066c\"", text, StringComparison.Ordinal);
+        Assert.DoesNotContain('\u202E', text);
+        Assert.Equal(x, Read(text).Document);
+    }
+
+    [Fact]
     public void A_changed_note_is_a_difference_that_moves_no_load()
     {
         string changed = Noted.Replace("drawing S-101", "drawing S-102", StringComparison.Ordinal)
