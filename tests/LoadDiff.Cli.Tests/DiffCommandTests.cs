@@ -84,6 +84,43 @@ public class DiffCommandTests
     }
 
     [Fact]
+    public void A_changed_note_is_shown_and_escaped_in_every_format()
+    {
+        using var t = new TempFolder();
+        const string template = """
+            { "note": "NOTE", "cases": { "d": { "note": "case NOTE", "loads": [
+              { "id": "p", "kind": "force", "at": [0, 0, 0], "value": [0, 0, -1], "note": "NOTE" } ] } } }
+            """;
+        // a note that would break each format if written raw: a line break, markup, a table bar, a backtick
+        string old = t.Write("old.loads.json", template.Replace("NOTE", "from S-101", StringComparison.Ordinal));
+        string @new = t.Write("new.loads.json", template.Replace("NOTE", "from S-102\\n<b>x</b> | `y`", StringComparison.Ordinal));
+
+        CliRun text = CliProcess.Run("diff", old, @new);
+        Assert.True(text.ExitCode == 1, text.ToString());
+        Assert.Contains("      note: \"from S-101\" → \"from S-102\\n<b>x</b> | `y`\"", text.Stdout, StringComparison.Ordinal);
+        Assert.Contains("case d note: \"case from S-101\" → \"case from S-102\\n", text.Stdout, StringComparison.Ordinal);
+        Assert.Contains("ΔR_i = (0, 0, 0)", text.Stdout, StringComparison.Ordinal);
+        Assert.DoesNotContain("from S-102\n", text.Stdout, StringComparison.Ordinal); // the line break stays escaped
+
+        CliRun html = CliProcess.Run("diff", old, @new, "--format", "html");
+        Assert.Equal(1, html.ExitCode);
+        Assert.Contains("&lt;b&gt;x&lt;/b&gt;", html.Stdout, StringComparison.Ordinal);
+        Assert.DoesNotContain("<b>x</b>", html.Stdout, StringComparison.Ordinal);
+
+        CliRun md = CliProcess.Run("diff", old, @new, "--format", "markdown");
+        Assert.Equal(1, md.ExitCode);
+        string row = md.Stdout.Split('\n').First(l => l.Contains("case d note", StringComparison.Ordinal));
+        Assert.Contains("\\|", row, StringComparison.Ordinal); // the bar cannot end the table cell
+        Assert.DoesNotContain("`y`", row, StringComparison.Ordinal); // nor the backtick the code span
+
+        CliRun json = CliProcess.Run("diff", old, @new, "--format", "json");
+        using var doc = System.Text.Json.JsonDocument.Parse(json.Stdout);
+        var field = doc.RootElement.GetProperty("items")[0].GetProperty("fields")[0];
+        Assert.Equal("note", field.GetProperty("field").GetString());
+        Assert.Equal("\"from S-102\\n<b>x</b> | `y`\"", field.GetProperty("new").GetString());
+    }
+
+    [Fact]
     public void Bad_input_exits_2_with_the_same_diagnostic_as_reduce()
     {
         using var t = new TempFolder();

@@ -23,6 +23,23 @@ public class DistributeCommandTests
     }
 
     [Fact]
+    public void The_written_substitute_is_canonical_and_reads_back_the_forces_printed_to_standard_output()
+    {
+        using var dir = new TempFolder();
+        string output = Path.Combine(dir.Path, "supports.loads.json");
+        Assert.Equal(0, CliProcess.Run("distribute", Skid, "--onto", Supports, "--couples", "-o", output).ExitCode);
+        CliRun fmt = CliProcess.Run("fmt", "--check", output);
+        Assert.True(fmt.ExitCode == 0, fmt.ToString());
+        // without -o the same text goes to standard output
+        CliRun stdout = CliProcess.Run("distribute", Skid, "--onto", Supports, "--couples");
+        Assert.Equal(File.ReadAllText(output), stdout.Stdout);
+        // what the file says about itself is a note, not a comment (the canonical form has none)
+        string text = File.ReadAllText(output);
+        Assert.DoesNotContain("/*", text, StringComparison.Ordinal);
+        Assert.Contains("\"note\": \"Written by loaddiff", text, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void Bolt_group_on_a_square_gets_the_elastic_method_forces()
     {
         // AISC Manual Part 7 / Salmon, Johnson & Malhas, Steel Structures, 5th ed., eccentric shear, elastic method

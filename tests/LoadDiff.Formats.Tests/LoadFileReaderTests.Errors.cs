@@ -69,19 +69,19 @@ public sealed partial class LoadFileReaderTests
     [Fact]
     public void Read_unknown_field_is_a_warning_by_default_and_an_error_in_strict_mode()
     {
-        const string json = """{ "cases": { "dead": { "loads": [ { "kind": "couple", "value": [0, 0, 1], "note": "x" } ] } } }""";
-        string path = _folder.Write("note.loads.json", json);
+        const string json = """{ "cases": { "dead": { "loads": [ { "kind": "couple", "value": [0, 0, 1], "remark": "x" } ] } } }""";
+        string path = _folder.Write("remark.loads.json", json);
         var sink = new CollectingSink();
         ReadResult result = LoadFileReader.Read(path, sink);
         Assert.True(result.Succeeded);
         Diagnostic w = Assert.Single(result.Diagnostics);
         Assert.Equal((Codes.UnknownField, Severity.Warning), (w.Code, w.Severity));
-        Assert.Equal((1, 75), (w.Location.Line, w.Location.Column)); // the key "note", counted by hand
+        Assert.Equal((1, 75), (w.Location.Line, w.Location.Column)); // the key "remark", counted by hand
         Assert.Single(sink.Case("dead").Items);
 
         Diagnostic e = ReadErrorAt(path, new ReadOptions { Strict = true });
         Assert.Equal(Codes.UnknownField, e.Code);
-        Assert.Equal("$.cases.dead.loads[0].note", e.Location.JsonPath);
+        Assert.Equal("$.cases.dead.loads[0].remark", e.Location.JsonPath);
     }
 
     [Fact]

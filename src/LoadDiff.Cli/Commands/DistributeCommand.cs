@@ -67,11 +67,11 @@ public static class DistributeCommand
             var distributor = new LoadDistributor(points, parse.GetValue(couples));
             (List<WrittenCase> written, List<LoadCombination> combinations) = Distribute(loaded, distributor, pointsPath, selected, error);
 
-            string comment = $"Written by loaddiff {AppInfo.Version} distribute: minimum-norm {(parse.GetValue(couples) ? "forces and couples" : "forces")} at the "
-                + $"{points.Count} points of {Path.GetFileName(pointsPath)},\nstatically equivalent by construction to each case of {Path.GetFileName(path)}.\n"
+            string note = $"Written by loaddiff {AppInfo.Version} distribute: minimum-norm {(parse.GetValue(couples) ? "forces and couples" : "forces")} at the "
+                + $"{points.Count} points of {Path.GetFileName(pointsPath)}, statically equivalent by construction to each case of {Path.GetFileName(path)}. "
                 + "Static equivalence is not equivalence of internal forces or stresses: see 'loaddiff sections'.";
             string title = $"{loaded.Header.Title ?? Path.GetFileName(path)}, distributed onto {Path.GetFileName(pointsPath)}";
-            void WriteTo(Stream s) => LoadFileWriter.Write(s, comment, title, loaded.Units, written, combinations);
+            void WriteTo(Stream s) => LoadFileWriter.Write(s, note, title, loaded.Units, written, combinations);
             if (outPath is null)
             {
                 using var ms = new MemoryStream();

@@ -1,9 +1,8 @@
-using System.Text.Encodings.Web;
-using System.Text.Json;
-using LoadDiff.Core;
+using System.Text;
 using LoadDiff.Core.Loads;
 using LoadDiff.Core.Reduction;
 using LoadDiff.Core.Units;
+using LoadDiff.Formats.Source;
 
 namespace LoadDiff.Formats.Json;
 
@@ -14,97 +13,36 @@ namespace LoadDiff.Formats.Json;
 public sealed record WrittenCase(string Name, string? Title, IReadOnlyList<LoadItem> Items);
 
 /// <summary>
-/// Writes a <c>.loads.json</c> document (SPEC §3) of point forces and free couples, with numbers in the shortest
-/// form that round-trips each double, so that reading it back gives exactly the values written.
+/// Writes a <c>.loads.json</c> document (SPEC §3) of point forces and free couples in the canonical form of
+/// <c>loaddiff fmt</c> (<see cref="CanonicalWriter"/>), so <c>fmt --check</c> accepts it and reading it back gives
+/// exactly the values written.
 /// </summary>
 public static class LoadFileWriter
 {
     /// <summary>Writes the document as UTF-8.</summary>
+    /// <param name="output">Where to write.</param>
+    /// <param name="note">The document's note (where the loads came from), or null.</param>
+    /// <param name="title">The document's title, or null.</param>
+    /// <param name="units">The units of every value.</param>
+    /// <param name="cases">The cases, in order.</param>
+    /// <param name="combinations">The combinations, in order.</param>
     /// <exception cref="ArgumentException">An item kind this writer does not handle.</exception>
-    public static void Write(Stream output, string? comment, string? title, UnitSystem units,
+    public static void Write(Stream output, string? note, string? title, UnitSystem units,
         IReadOnlyList<WrittenCase> cases, IReadOnlyList<LoadCombination> combinations)
     {
         ArgumentNullException.ThrowIfNull(output);
         ArgumentNullException.ThrowIfNull(units);
         ArgumentNullException.ThrowIfNull(cases);
         ArgumentNullException.ThrowIfNull(combinations);
-        using var w = new Utf8JsonWriter(output, new JsonWriterOptions { Indented = true, Encoder = JavaScriptEncoder.UnsafeRelaxedJsonEscaping });
-        if (comment is not null)
-        {
-            foreach (string line in comment.Split('\n'))
-            {
-                w.WriteCommentValue(" " + line.Replace("*/", "* /", StringComparison.Ordinal) + " ");
-            }
-        }
-        w.WriteStartObject();
-        w.WriteString("format", LoadJsonWalker.FormatTag);
-        if (title is not null)
-        {
-            w.WriteString("title", title);
-        }
-        w.WriteStartObject("units");
-        w.WriteString("force", units.Force.Symbol);
-        w.WriteString("length", units.Length.Symbol);
-        w.WriteString("mass", units.Mass.Symbol);
-        w.WriteEndObject();
-        w.WriteStartObject("cases");
-        foreach (WrittenCase c in cases)
-        {
-            w.WriteStartObject(c.Name);
-            if (c.Title is not null)
-            {
-                w.WriteString("title", c.Title);
-            }
-            w.WriteStartArray("loads");
-            foreach (LoadItem item in c.Items)
-            {
-                w.WriteStartObject();
-                w.WriteString("id", item.Id);
-                switch (item)
-                {
-                    case PointForce f:
-                        w.WriteString("kind", "force");
-                        Vector(w, "at", f.At);
-                        Vector(w, "value", f.Value);
-                        break;
-                    case FreeCouple m:
-                        w.WriteString("kind", "couple");
-                        Vector(w, "value", m.Value);
-                        break;
-                    default:
-                        throw new ArgumentException($"cannot write a {item.Kind} item", nameof(cases));
-                }
-                w.WriteEndObject();
-            }
-            w.WriteEndArray();
-            w.WriteEndObject();
-        }
-        w.WriteEndObject();
-        if (combinations.Count > 0)
-        {
-            w.WriteStartObject("combinations");
-            foreach (LoadCombination combination in combinations)
-            {
-                w.WriteStartObject(combination.Name);
-                foreach (KeyValuePair<string, double> f in combination.Factors)
-                {
-                    w.WriteNumber(f.Key, f.Value);
-                }
-                w.WriteEndObject();
-            }
-            w.WriteEndObject();
-        }
-        w.WriteEndObject();
-        w.Flush();
-        output.WriteByte((byte)'\n');
+        var document = new LoadDocument(title, units, null, [],
+            [.. cases.Select(c => new SourceCase(c.Name, c.Title, [.. c.Items.Select(Item)]))], [.. combinations]) { Note = note };
+        output.Write(new UTF8Encoding(false).GetBytes(CanonicalWriter.Write(document)));
     }
 
-    private static void Vector(Utf8JsonWriter w, string name, Vector3 v)
+    private static SourceItem Item(LoadItem item) => item switch
     {
-        w.WriteStartArray(name);
-        w.WriteNumberValue(v.X);
-        w.WriteNumberValue(v.Y);
-        w.WriteNumberValue(v.Z);
-        w.WriteEndArray();
-    }
+        PointForce f => new SourceItem(f.Id, "force", [new SourceField("at", new VectorValue(f.At)), new SourceField("value", new VectorValue(f.Value))]),
+        FreeCouple m => new SourceItem(m.Id, "couple", [new SourceField("value", new VectorValue(m.Value))]),
+        _ => throw new ArgumentException($"cannot write a {item.Kind} item", nameof(item)),
+    };
 }

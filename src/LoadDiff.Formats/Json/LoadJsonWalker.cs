@@ -18,8 +18,8 @@ internal sealed class LoadJsonWalker
 {
     public const string FormatTag = "loaddiff/1";
 
-    private static readonly string[] RootKeys = ["format", "title", "units", "gravity", "points", "cases", "combinations"];
-    private static readonly string[] CaseKeys = ["title", "loads"];
+    private static readonly string[] RootKeys = ["format", "title", "note", "units", "gravity", "points", "cases", "combinations"];
+    private static readonly string[] CaseKeys = ["title", "note", "loads"];
 
     private readonly string _file;
     private readonly ILineLocator _lines;
@@ -60,6 +60,7 @@ internal sealed class LoadJsonWalker
             }
         }
         string? title = root["title"] is { } t ? String(t, "$.title") : null;
+        Note(root, "$");
         JsonNode? unitsNode = root["units"];
         UnitSystem source = ReadUnits(unitsNode);
         UnitSystem target = _options.TargetUnits ?? source;
@@ -164,6 +165,7 @@ internal sealed class LoadJsonWalker
         Expect(c.Value, JsonKind.Object, cpath, "a load case must be an object with a 'loads' array");
         CheckKeys(c.Value, cpath, CaseKeys);
         string? title = c.Value["title"] is { } t ? String(t, cpath + ".title") : null;
+        Note(c.Value, cpath);
         JsonNode loads = c.Value["loads"] ?? throw Error(c.Value, cpath, Codes.MissingField, $"case '{c.Key}' has no 'loads' array");
         Expect(loads, JsonKind.Array, cpath + ".loads", "'loads' must be an array of load items");
         sink.BeginCase(c.Key, title);
@@ -186,6 +188,7 @@ internal sealed class LoadJsonWalker
         JsonNode kindNode = item["kind"] ?? throw Error(item, path, Codes.MissingField,
             "missing 'kind'; expected one of force, couple, line, area, mass, mesh, forces");
         string kind = String(kindNode, path + ".kind");
+        Note(item, path);
         string? id = null;
         if (item["id"] is { } idNode)
         {
@@ -231,7 +234,7 @@ internal sealed class LoadJsonWalker
         {
             case "force":
             {
-                CheckKeys(item, path, ["id", "kind", "at", "value"]);
+                CheckKeys(item, path, ["id", "kind", "note", "at", "value"]);
                 Vector3 at = PointOrVec(Required(item, "at", path), path + ".at");
                 Vector3 v = Vec(Required(item, "value", path), path + ".value") * _units.Force;
                 Emit(new PointForce(Begin("force@" + Text(at)), at, v));
@@ -239,7 +242,7 @@ internal sealed class LoadJsonWalker
             }
             case "couple":
             {
-                CheckKeys(item, path, ["id", "kind", "value"]);
+                CheckKeys(item, path, ["id", "kind", "note", "value"]);
                 Vector3 v = Vec(Required(item, "value", path), path + ".value") * _units.Moment;
                 couples++;
                 Emit(new FreeCouple(Begin("couple#" + couples.ToString(CultureInfo.InvariantCulture)), v));
@@ -247,7 +250,7 @@ internal sealed class LoadJsonWalker
             }
             case "line":
             {
-                CheckKeys(item, path, ["id", "kind", "from", "to", "start", "end"]);
+                CheckKeys(item, path, ["id", "kind", "note", "from", "to", "start", "end"]);
                 JsonNode toNode = Required(item, "to", path);
                 Vector3 a = PointOrVec(Required(item, "from", path), path + ".from");
                 Vector3 b = PointOrVec(toNode, path + ".to");
@@ -262,7 +265,7 @@ internal sealed class LoadJsonWalker
             }
             case "area":
             {
-                CheckKeys(item, path, ["id", "kind", "polygon", "pressure", "direction", "gradient", "origin"]);
+                CheckKeys(item, path, ["id", "kind", "note", "polygon", "pressure", "direction", "gradient", "origin"]);
                 JsonNode polyNode = Required(item, "polygon", path);
                 Expect(polyNode, JsonKind.Array, path + ".polygon", "'polygon' must be an array of at least three points");
                 var poly = ImmutableArray.CreateBuilder<Vector3>();
@@ -298,7 +301,7 @@ internal sealed class LoadJsonWalker
             }
             case "mass":
             {
-                CheckKeys(item, path, ["id", "kind", "at", "value"]);
+                CheckKeys(item, path, ["id", "kind", "note", "at", "value"]);
                 Vector3 at = PointOrVec(Required(item, "at", path), path + ".at");
                 double m = Number(Required(item, "value", path), path + ".value") * _units.Mass;
                 Emit(new PointMass(Begin("mass@" + Text(at)), at, m, _gravity));
@@ -306,7 +309,7 @@ internal sealed class LoadJsonWalker
             }
             case "mesh":
             {
-                CheckKeys(item, path, ["id", "kind", "file", "vertices", "triangles", "direction"]);
+                CheckKeys(item, path, ["id", "kind", "note", "file", "vertices", "triangles", "direction"]);
                 string meshId = Begin("mesh#" + ids.Count.ToString(CultureInfo.InvariantCulture));
                 Vector3? dir = Direction(item["direction"], path + ".direction");
                 var csv = new CsvLoadReader(_units, _options, li => sink.Item(li), () => ++_items);
@@ -335,7 +338,7 @@ internal sealed class LoadJsonWalker
             }
             case "forces":
             {
-                CheckKeys(item, path, ["id", "kind", "file"]);
+                CheckKeys(item, path, ["id", "kind", "note", "file"]);
                 string prefix = Begin("forces#" + ids.Count.ToString(CultureInfo.InvariantCulture));
                 if (LeftOut(item, path, "file"))
                 {
@@ -509,6 +512,15 @@ internal sealed class LoadJsonWalker
 
     private string String(JsonNode node, string path) =>
         node.Kind == JsonKind.String ? node.Text! : throw Error(node, path, Codes.WrongType, $"expected a string, found {node.KindName}");
+
+    // A note is free text (any characters; every output escapes it), so only its type is checked.
+    private void Note(JsonNode obj, string path)
+    {
+        if (obj["note"] is { } note)
+        {
+            String(note, path + ".note");
+        }
+    }
 
     private void Expect(JsonNode node, JsonKind kind, string path, string message)
     {

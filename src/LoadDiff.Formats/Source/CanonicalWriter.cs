@@ -5,10 +5,10 @@ namespace LoadDiff.Formats.Source;
 
 /// <summary>
 /// Writes a <see cref="LoadDocument"/> in the canonical form of <c>loaddiff fmt</c>:
-/// top-level keys in the order format, title, units, gravity, points, cases, combinations; named points, cases,
-/// items, combinations and factors in the order of the file; each item on one line with its keys in the fixed
-/// order id, kind, then the kind's fields (<see cref="Quantities.FieldOrder"/>); numbers in the shortest text that
-/// reads back as the same double; two-space indentation, LF line ends, a final newline, no comments.
+/// top-level keys in the order format, title, note, units, gravity, points, cases, combinations; a case's keys in the
+/// order title, note, loads; named points, cases, items, combinations and factors in the order of the file; each item
+/// on one line with its keys in the fixed order id, kind, the kind's fields (<see cref="Quantities.FieldOrder"/>), note;
+/// numbers in the shortest text that reads back as the same double; two-space indentation, LF line ends, a final newline, no comments.
 /// Reading the output gives exactly the same document.
 /// </summary>
 public static class CanonicalWriter
@@ -26,6 +26,10 @@ public static class CanonicalWriter
         if (document.Title is not null)
         {
             top.Add("  \"title\": " + SourceText.Quoted(document.Title));
+        }
+        if (document.Note is not null)
+        {
+            top.Add("  \"note\": " + SourceText.Quoted(document.Note));
         }
         top.Add($"  \"units\": {{ \"force\": {SourceText.Quoted(document.Units.Force.Symbol)}, \"length\": {SourceText.Quoted(document.Units.Length.Symbol)}, \"mass\": {SourceText.Quoted(document.Units.Mass.Symbol)} }}");
         if (document.Gravity is { } g)
@@ -57,6 +61,10 @@ public static class CanonicalWriter
         }
         parts.Add("\"kind\": " + SourceText.Quoted(item.Kind));
         parts.AddRange(item.Fields.Select(f => SourceText.Quoted(f.Name) + ": " + SourceText.Of(f.Value)));
+        if (item.Note is not null)
+        {
+            parts.Add("\"note\": " + SourceText.Quoted(item.Note));
+        }
         return "{ " + string.Join(", ", parts) + " }";
     }
 
@@ -67,6 +75,10 @@ public static class CanonicalWriter
         if (c.Title is not null)
         {
             sb.Append("      \"title\": ").Append(SourceText.Quoted(c.Title)).Append(",\n");
+        }
+        if (c.Note is not null)
+        {
+            sb.Append("      \"note\": ").Append(SourceText.Quoted(c.Note)).Append(",\n");
         }
         if (c.Items.Length == 0)
         {

@@ -48,6 +48,10 @@ public static class DocumentDiffer
         {
             settings.Add(new SettingChange("title", Kind(a.Title, b.Title), Q(a.Title), Q(b.Title), ""));
         }
+        if (a.Note != b.Note)
+        {
+            settings.Add(new SettingChange("note", Kind(a.Note, b.Note), Q(a.Note), Q(b.Note), ""));
+        }
         if (converted)
         {
             settings.Add(new SettingChange("units", ChangeKind.Changed, a.Units.ToString(), bAsWritten.Units.ToString(), ""));
@@ -87,9 +91,16 @@ public static class DocumentDiffer
                 settings.Add(new SettingChange("case " + name, ca is null ? ChangeKind.Added : ChangeKind.Removed,
                     ca is null ? null : Count(only), cb is null ? null : Count(only), ""));
             }
-            else if (ca.Title != cb.Title)
+            else
             {
-                settings.Add(new SettingChange($"case {name} title", Kind(ca.Title, cb.Title), Q(ca.Title), Q(cb.Title), ""));
+                if (ca.Title != cb.Title)
+                {
+                    settings.Add(new SettingChange($"case {name} title", Kind(ca.Title, cb.Title), Q(ca.Title), Q(cb.Title), ""));
+                }
+                if (ca.Note != cb.Note)
+                {
+                    settings.Add(new SettingChange($"case {name} note", Kind(ca.Note, cb.Note), Q(ca.Note), Q(cb.Note), ""));
+                }
             }
             items.AddRange(CompareCase(name, ca, cb, old.Resultants!, @new.Resultants!, point, ctx));
             resultants.Add(new ResultantChange(name, EntryKind.Case,
@@ -217,6 +228,10 @@ public static class DocumentDiffer
                 // the rows differ although the resultants agree (loads moved without changing R or M): never "no differences"
                 fields.Add(new FieldChange("referenced data", RowsText(ia[i]), RowsText(ib[j]) + "; rows differ, the resultant is unchanged", ""));
             }
+            if (x.Note != y.Note)
+            {
+                fields.Add(new FieldChange("note", Q(x.Note), Q(y.Note), ""));
+            }
             if (fields.Count > 0)
             {
                 list.Add(new ItemChange(name, ia[i].Key, x.Id is null, y.Kind, ChangeKind.Changed, fields, fb - fa, mb - ma));
@@ -236,7 +251,8 @@ public static class DocumentDiffer
 
     private static List<FieldChange> AllFields(SourceItem item, LoadDocument doc, Context ctx, bool removed) =>
         [.. item.Fields.Select(f => new FieldChange(f.Name, removed ? Context.Text(f.Value, doc) : null, removed ? null : Context.Text(f.Value, doc),
-            Quantities.Symbol(Quantities.Of(item.Kind, f.Name), ctx.Old.Units)))];
+            Quantities.Symbol(Quantities.Of(item.Kind, f.Name), ctx.Old.Units))),
+        .. item.Note is null ? [] : new[] { new FieldChange("note", removed ? Q(item.Note) : null, removed ? null : Q(item.Note), "") }];
 
     private static bool SameFactors(LoadCombination a, LoadCombination b) =>
         a.Factors.Length == b.Factors.Length && a.Factors.All(f => b.Factors.Any(g => g.Key == f.Key && g.Value == f.Value));

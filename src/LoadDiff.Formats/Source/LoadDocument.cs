@@ -21,6 +21,9 @@ public sealed record LoadDocument(
     string? Title, UnitSystem Units, Vector3? Gravity, ImmutableArray<KeyValuePair<string, Vector3>> Points,
     ImmutableArray<SourceCase> Cases, ImmutableArray<LoadCombination> Combinations)
 {
+    /// <summary>The document's note (free text: where the loads came from and why), or null.</summary>
+    public string? Note { get; init; }
+
     /// <summary>The named point, or null.</summary>
     public Vector3? Point(string name)
     {
@@ -36,7 +39,7 @@ public sealed record LoadDocument(
 
     /// <inheritdoc/>
     public bool Equals(LoadDocument? other) =>
-        other is not null && Title == other.Title && Units == other.Units && Nullable.Equals(Gravity, other.Gravity)
+        other is not null && Title == other.Title && Note == other.Note && Units == other.Units && Nullable.Equals(Gravity, other.Gravity)
         && Points.SequenceEqual(other.Points) && Cases.SequenceEqual(other.Cases) && Combinations.SequenceEqual(other.Combinations);
 
     /// <inheritdoc/>

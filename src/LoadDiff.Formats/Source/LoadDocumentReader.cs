@@ -1,5 +1,4 @@
 using System.Collections.Immutable;
-using System.Text.Json;
 using LoadDiff.Core;
 using LoadDiff.Core.Reduction;
 using LoadDiff.Core.Units;
@@ -15,7 +14,7 @@ namespace LoadDiff.Formats.Source;
 /// </summary>
 public static class LoadDocumentReader
 {
-    private static readonly string[] RootKeys = ["format", "title", "units", "gravity", "points", "cases", "combinations"];
+    private static readonly string[] RootKeys = ["format", "title", "note", "units", "gravity", "points", "cases", "combinations"];
 
     /// <summary>Reads a file from disk, or standard input for <c>-</c>.</summary>
     /// <param name="path">The file as the user named it.</param>
@@ -58,26 +57,14 @@ public static class LoadDocumentReader
         }
         var dropped = new List<string>();
         LoadDocument document = Build(root!, dropped);
-        return new SourceReadResult(document, resultants, HasComments(utf8.AsSpan(bom)), dropped, warnings);
+        List<SourceComment> comments = CommentScanner.Scan(bom == 0 ? utf8 : utf8[bom..], root!, options.MaxDepth);
+        return new SourceReadResult(document, resultants, comments.Count > 0, dropped, warnings) { Comments = comments };
     }
 
     /// <summary>Reads a document from a string (for tests and tools); referenced files resolve against the current folder.</summary>
     public static SourceReadResult ReadText(string json, string displayName = "-", ReadOptions? options = null) =>
         ReadBytes(System.Text.Encoding.UTF8.GetBytes(json ?? throw new ArgumentNullException(nameof(json))), displayName,
             Directory.GetCurrentDirectory(), options);
-
-    private static bool HasComments(ReadOnlySpan<byte> utf8)
-    {
-        var reader = new Utf8JsonReader(utf8, new JsonReaderOptions { CommentHandling = JsonCommentHandling.Allow, AllowTrailingCommas = true, MaxDepth = 256 });
-        while (reader.Read())
-        {
-            if (reader.TokenType == JsonTokenType.Comment)
-            {
-                return true;
-            }
-        }
-        return false;
-    }
 
     // The tree has been validated by the walker: every shape below is known to be right.
     private static LoadDocument Build(JsonNode root, List<string> dropped)
@@ -106,14 +93,14 @@ public static class LoadDocumentReader
         foreach (JsonMember c in root["cases"]!.Members!)
         {
             string cpath = LoadJsonWalker.Path("$.cases", c.Key);
-            Unknown(c.Value, cpath, ["title", "loads"], dropped);
+            Unknown(c.Value, cpath, ["title", "note", "loads"], dropped);
             var items = ImmutableArray.CreateBuilder<SourceItem>();
             List<JsonNode> loads = c.Value["loads"]!.Elements!;
             for (int i = 0; i < loads.Count; i++)
             {
                 items.Add(Item(loads[i], $"{cpath}.loads[{i}]", dropped));
             }
-            cases.Add(new SourceCase(c.Key, c.Value["title"]?.Text, items.ToImmutable()));
+            cases.Add(new SourceCase(c.Key, c.Value["title"]?.Text, items.ToImmutable()) { Note = c.Value["note"]?.Text });
         }
         var combinations = ImmutableArray.CreateBuilder<LoadCombination>();
         if (root["combinations"] is { } combos)
@@ -124,14 +111,14 @@ public static class LoadDocumentReader
                     [.. m.Value.Members!.Select(f => new KeyValuePair<string, double>(f.Key, f.Value.Number))]));
             }
         }
-        return new LoadDocument(title, units, gravity, points.ToImmutable(), cases.ToImmutable(), combinations.ToImmutable());
+        return new LoadDocument(title, units, gravity, points.ToImmutable(), cases.ToImmutable(), combinations.ToImmutable()) { Note = root["note"]?.Text };
     }
 
     private static SourceItem Item(JsonNode node, string path, List<string> dropped)
     {
         string kind = node["kind"]!.Text!;
         IReadOnlyList<string> order = Quantities.FieldOrder(kind);
-        Unknown(node, path, ["id", "kind", .. order], dropped);
+        Unknown(node, path, ["id", "kind", "note", .. order], dropped);
         var fields = ImmutableArray.CreateBuilder<SourceField>();
         foreach (string name in order)
         {
@@ -154,7 +141,7 @@ public static class LoadDocumentReader
                 : Quantities.Of(kind, name) == Quantity.Length ? PointOrVector(v)
                 : Value(v)));
         }
-        return new SourceItem(node["id"]?.Text, kind, fields.ToImmutable());
+        return new SourceItem(node["id"]?.Text, kind, fields.ToImmutable()) { Note = node["note"]?.Text };
     }
 
     private static SourceValue Value(JsonNode v) => v.Kind switch

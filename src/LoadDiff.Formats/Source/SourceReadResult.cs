@@ -12,6 +12,9 @@ public sealed record SourceReadResult(
     LoadDocument? Document, DocumentResultants? Resultants, bool HasComments, IReadOnlyList<string> DroppedFields,
     IReadOnlyList<Diagnostic> Diagnostics)
 {
+    /// <summary>Every comment of the file in file order, each with the element it directly precedes (empty when there are none).</summary>
+    public IReadOnlyList<SourceComment> Comments { get; init; } = [];
+
     /// <summary>True when no error was found (warnings allowed).</summary>
     public bool Succeeded => Document is not null && Diagnostics.All(d => d.Severity != Severity.Error);
 

@@ -47,12 +47,28 @@ public static class SourceText
     /// <summary>A vector on one line: <c>[x, y, z]</c>.</summary>
     public static string Vector(Vector3 v) => "[" + Number(v.X) + ", " + Number(v.Y) + ", " + Number(v.Z) + "]";
 
-    /// <summary>A JSON string literal with quotes; non-ASCII text stays readable.</summary>
+    /// <summary>
+    /// A JSON string literal with quotes; non-ASCII text stays readable, control characters are escaped, and so are the
+    /// bidirectional controls (U+061C, U+200E, U+200F, U+202A–U+202E, U+2066–U+2069), which would otherwise reorder
+    /// what a reviewer sees of the line around them.
+    /// </summary>
     public static string Quoted(string s)
     {
+        ArgumentNullException.ThrowIfNull(s);
         var sb = new StringBuilder(s.Length + 2);
-        sb.Append('"').Append(JsonEncodedText.Encode(s, Encoder).Value).Append('"');
-        return sb.ToString();
+        sb.Append('"');
+        foreach (char c in JsonEncodedText.Encode(s, Encoder).Value)
+        {
+            if (c is '\u061C' or '\u200E' or '\u200F' or (>= '\u202A' and <= '\u202E') or (>= '\u2066' and <= '\u2069'))
+            {
+                sb.Append("\\u").Append(((int)c).ToString("X4", CultureInfo.InvariantCulture));
+            }
+            else
+            {
+                sb.Append(c);
+            }
+        }
+        return sb.Append('"').ToString();
     }
 
     /// <summary>A field value as canonical JSON.</summary>

@@ -131,10 +131,10 @@ public class CanonicalWriterTests
     [Fact]
     public void Comments_and_unknown_fields_are_reported_because_the_model_does_not_keep_them()
     {
-        SourceReadResult r = LoadDocumentReader.ReadText("""{ /* c */ "cases": { "d": { "loads": [ { "kind": "couple", "value": [0, 0, 1], "note": "x" } ] } } }""");
+        SourceReadResult r = LoadDocumentReader.ReadText("""{ /* c */ "cases": { "d": { "loads": [ { "kind": "couple", "value": [0, 0, 1], "remark": "x" } ] } } }""");
         Assert.True(r.Succeeded);
         Assert.True(r.HasComments);
-        Assert.Equal(["$.cases.d.loads[0].note"], r.DroppedFields);
+        Assert.Equal(["$.cases.d.loads[0].remark"], r.DroppedFields);
         Assert.False(LoadDocumentReader.ReadText("""{ "cases": { "d": { "loads": [] } } }""").HasComments);
     }
 }

@@ -35,19 +35,37 @@ internal static class SourceSamples
             $"\"kind\": \"area\", \"polygon\": {poly}, \"pressure\": {N(p)}" + (normal ? "" : $", \"direction\": [0, 0, -1], \"gradient\": {g}")),
         Gen.Select(Vec, AnyNumber, (a, m) => $"\"kind\": \"mass\", \"at\": {a}, \"value\": {N(m)}"));
 
-    /// <summary>A whole document: units, optional gravity and points, one to three cases, a combination.</summary>
+    // Unicode scalar values of every kind a note may hold: control characters, ASCII, the BMP on both sides of the
+    // surrogates, and supplementary planes (a lone surrogate is not text, and the reader rejects it).
+    private static readonly Gen<string> NoteChar = Gen.OneOf(
+        Gen.Int[0, 0x1F], Gen.Int[0x20, 0x7E], Gen.Int[0x7F, 0xD7FF], Gen.Int[0xE000, 0xFFFF], Gen.Int[0x10000, 0x10FFFF]).Select(char.ConvertFromUtf32);
+
+    /// <summary>A note as a JSON string literal (escaped by the BCL's encoder, not by the code under test), or null for none.</summary>
+    public static readonly Gen<string?> Note = Gen.Select(Gen.Bool, NoteChar.Array[0, 12],
+        (present, chars) => present ? "\"" + System.Text.Json.JsonEncodedText.Encode(string.Concat(chars)).Value + "\"" : null);
+
+    private static readonly Gen<string> NotedItemBody = Gen.Select(ItemBody, Note, (body, note) => note is null ? body : body + ", \"note\": " + note);
+
+    private static readonly Gen<(string? Note, string[] Items)> NotedCase = Gen.Select(Note, NotedItemBody.Array[1, 5], (note, items) => (note, items));
+
+    /// <summary>A whole document: units, optional gravity and points, one to three cases, a combination; notes here and there.</summary>
     public static readonly Gen<string> Document =
         Gen.Select(
             Pick("N", "kN", "MN", "lbf", "kip", "kgf", "tf"),
             Pick("m", "mm", "cm", "ft", "in"),
             Pick("kg", "t", "lb"),
             Gen.Bool,
-            ItemBody.Array[1, 5].Array[1, 3],
+            NotedCase.Array[1, 3],
             AnyNumber,
-            (force, length, mass, gravity, cases, factor) =>
+            Note,
+            (force, length, mass, gravity, cases, factor, note) =>
             {
                 var sb = new System.Text.StringBuilder();
                 sb.Append("{ \"title\": \"random \\u00e9 \\\"q\\\"\", ");
+                if (note is not null)
+                {
+                    sb.Append("\"note\": ").Append(note).Append(", ");
+                }
                 sb.Append($"\"units\": {{ \"force\": \"{force}\", \"length\": \"{length}\", \"mass\": \"{mass}\" }}, ");
                 if (gravity)
                 {
@@ -56,11 +74,16 @@ internal static class SourceSamples
                 sb.Append("\"points\": { \"P\": [1, 2, 3] }, \"cases\": {");
                 for (int c = 0; c < cases.Length; c++)
                 {
-                    sb.Append(c == 0 ? "" : ", ").Append($"\"c{c}\": {{ \"loads\": [");
-                    for (int i = 0; i < cases[c].Length; i++)
+                    sb.Append(c == 0 ? "" : ", ").Append($"\"c{c}\": {{ ");
+                    if (cases[c].Note is { } caseNote)
+                    {
+                        sb.Append("\"note\": ").Append(caseNote).Append(", ");
+                    }
+                    sb.Append("\"loads\": [");
+                    for (int i = 0; i < cases[c].Items.Length; i++)
                     {
                         string id = i % 2 == 0 ? $"\"id\": \"i{i}\", " : "";
-                        sb.Append(i == 0 ? "" : ", ").Append("{ ").Append(id).Append(cases[c][i]).Append(" }");
+                        sb.Append(i == 0 ? "" : ", ").Append("{ ").Append(id).Append(cases[c].Items[i]).Append(" }");
                     }
                     sb.Append("] }");
                 }
