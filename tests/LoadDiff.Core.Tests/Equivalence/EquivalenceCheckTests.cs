@@ -277,6 +277,19 @@ public class EquivalenceCheckTests
     }
 
     [Fact]
+    public void A_search_among_fewer_items_than_the_case_has_says_it_was_bounded()
+    {
+        // Two items kept per case: the original's third and smallest load (1 kN, left out of the substitute) was never a
+        // candidate, so no suspect is named and the explanation must say the search was bounded.
+        var original = new CheckSide("a", Sink(2, [("G", [Down("f5", 0, 5), Down("f3", 1, 3), Down("f1", 2, 1)])]));
+        var substitute = new CheckSide("b", Sink(2, [("G", [Down("f5", 0, 5), Down("f3", 1, 3)])]));
+        CaseComparison c = Entry(Run(original, substitute), "G");
+        Assert.False(c.Equivalent); // ΔR = 1 kN against 1e-3 × 9 kN
+        Assert.Empty(c.Explanation!.Suspects);
+        Assert.True(c.Explanation.SearchBounded);
+    }
+
+    [Fact]
     public void A_search_among_every_item_is_not_bounded()
     {
         var original = new CheckSide("a", Sink(3, [("G", [Down("f5", 0, 5), Down("f3", 1, 3), Down("f1", 2, 1)])]));

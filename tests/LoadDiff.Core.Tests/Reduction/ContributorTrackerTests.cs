@@ -192,6 +192,16 @@ public class ContributorTrackerTests
         Assert.False(t.Truncated);
     }
 
+    [Theory]
+    [InlineData(8, 5, "f8")] // the smaller second item is left out
+    [InlineData(5, 8, "f8")] // the larger second item replaces the first
+    public void A_tracker_of_one_keeps_the_larger_force_and_says_so_before_anything_is_listed(double first, double second, string kept)
+    {
+        ContributorTracker t = Offered(1, Down("f" + first, 0, first), Down("f" + second, 1, second));
+        Assert.True(t.Truncated); // read first: the last item offered counts as well
+        Assert.Equal([kept], t.Forces.Select(c => c.Id));
+    }
+
     [Fact]
     public void A_tracker_of_one_keeps_the_larger_couple()
     {
