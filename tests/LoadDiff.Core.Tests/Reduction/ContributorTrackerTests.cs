@@ -211,6 +211,18 @@ public class ContributorTrackerTests
     }
 
     [Fact]
+    public void A_full_list_of_couples_does_not_keep_forces_out_and_the_other_way_round()
+    {
+        // Capacity 1 of each: a large couple fills the couples, and still the larger of two small forces is kept.
+        ContributorTracker t = Offered(1, new FreeCouple("c100", V(0, 0, 100)), Down("f5", 0, 5), Down("f8", 1, 8));
+        Assert.Equal(["f8"], t.Forces.Select(c => c.Id));
+        Assert.Equal(["c100"], t.Couples.Select(c => c.Id));
+        ContributorTracker u = Offered(1, Down("f100", 0, 100), new FreeCouple("c5", V(0, 5, 0)), new FreeCouple("c8", V(8, 0, 0)));
+        Assert.Equal(["c8"], u.Couples.Select(c => c.Id));
+        Assert.Equal(["f100"], u.Forces.Select(c => c.Id));
+    }
+
+    [Fact]
     public void Ready_contributors_are_ranked_with_the_items()
     {
         // An item offered before a ready contributor is complete: the same id offered after it is a new contributor.
