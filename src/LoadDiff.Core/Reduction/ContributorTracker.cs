@@ -22,6 +22,7 @@ public sealed class ContributorTracker
     private Vector3 _pendingFirst;
     private double _pendingGross;
     private long _pendingParts;
+    private bool _truncated;
 
     /// <summary>Creates a tracker keeping <paramref name="capacity"/> forces and as many couples.</summary>
     public ContributorTracker(int capacity)
@@ -31,7 +32,15 @@ public sealed class ContributorTracker
     }
 
     /// <summary>True when a contributor was left out because the tracker was full.</summary>
-    public bool Truncated { get; private set; }
+    public bool Truncated
+    {
+        get
+        {
+            // the item still being summed may be the one left out
+            Flush();
+            return _truncated;
+        }
+    }
 
     /// <summary>Offers one item.</summary>
     public void Offer(LoadItem item)
@@ -118,7 +127,7 @@ public sealed class ContributorTracker
         if (heap.Count == _capacity && heap.TryPeek(out _, out (double Magnitude, long) least) && magnitude <= least.Magnitude)
         {
             // it would not be kept: build nothing
-            Truncated = true;
+            _truncated = true;
             _pendingId = null;
             _pendingForce = _pendingCouple = _pendingMoment = _pendingFirst = Vector3.Zero;
             _pendingGross = 0;
@@ -150,7 +159,7 @@ public sealed class ContributorTracker
             heap.Enqueue(ranked, key);
             return;
         }
-        Truncated = true;
+        _truncated = true;
         if (heap.TryPeek(out _, out (double Magnitude, long) least) && entry.Magnitude > least.Magnitude)
         {
             heap.EnqueueDequeue(ranked, key);
