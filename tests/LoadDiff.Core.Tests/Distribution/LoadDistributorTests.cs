@@ -106,8 +106,11 @@ public class LoadDistributorTests
             // The check's force tolerance is rel·G_F; with (next to) no forces in the original, only couples, that is
             // (next to) zero, while the cancelling forces that carry a couple leave a rounding residual of about
             // 1e-16·G_C/ℓ. The CLI says so and suggests --force-tol; here an absolute 1e-9·G_C/ℓ is given, far
-            // below rel·G_F whenever the original has forces of any real size.
-            var tolerance = ToleranceSpec.Create(ToleranceSpec.DefaultRelative, 1e-9 * original.GrossCouple / d.LengthScale, 0);
+            // below rel·G_F whenever the original has forces of any real size. Likewise for the moment: an original
+            // whose forces all act at one point has G_M = 0 (and no rounding floor when that point is the origin),
+            // while the distributed forces leave a rounding residual of about 1e-16·(G_F·ℓ + G_C); 1e-9 of that is given.
+            var tolerance = ToleranceSpec.Create(ToleranceSpec.DefaultRelative, 1e-9 * original.GrossCouple / d.LengthScale,
+                1e-9 * ((original.GrossForce * d.LengthScale) + original.GrossCouple));
             CaseComparison c = EquivalenceChecker.Compare("case", EntryKind.Case, original, acc.ResultAt(d.Centroid), tolerance);
             Assert.True(c.Equivalent, $"|ΔR| {c.Residual!.ForceNorm} allowed {c.Tolerance!.Force}; |ΔM| {c.Residual.WorstMomentNorm} allowed {c.Tolerance.Moment}");
             // Far tighter than the tolerance: equilibrium holds to rounding.

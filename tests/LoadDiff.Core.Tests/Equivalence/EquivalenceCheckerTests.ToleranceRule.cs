@@ -108,10 +108,12 @@ public partial class EquivalenceCheckerTests
         new FreeCouple("c", V(1, 4, 8)),
     ];
 
-    // Noise by the formula of SPEC §4 / RoundingNoise (1e-12 of the gross magnitudes; the moment one over the union box
-    // (0,0,−1)…(3,4,12), whose reach is its diagonal √194 plus the largest corner distance from the origin, 13).
+    // Noise by the formula of SPEC §4 / RoundingNoise (1e-12 of the gross magnitudes, the smaller of the two systems;
+    // the moment one over each system's own box, reach = its diagonal plus its largest corner distance from the
+    // origin): original (0,0,0)…(3,4,12), 13 + 13, so 9 + 45·26 = 1179; substitute (0,0,−1)…(3,4,12), √194 + 13,
+    // larger; the original's governs.
     private static readonly double RuleNoiseForce = 1e-12 * 45;
-    private static readonly double RuleNoiseMoment = 1e-12 * (9 + (45 * (Math.Sqrt(194) + 13)));
+    private static readonly double RuleNoiseMoment = 1e-12 * (9 + (45 * 26));
 
     [Fact]
     public void Compare_grossMagnitudesAndDiagonal_areTheOriginalsNotTheUnionBox()
@@ -204,7 +206,7 @@ public partial class EquivalenceCheckerTests
     public void Compare_relativeEqualToNoise_tieGoesToRelative_andNoiseAboveRelativeGoverns()
     {
         // rel = 1e-12: rel·G_F = 1e-12·45 is the force noise exactly (tie → the user's part); rel·G_M = 1e-12·594 is
-        // below the moment noise 1e-12·(9 + 45·(√194 + 13)) ≈ 1.22e-9, which then governs.
+        // below the moment noise 1e-12·(9 + 45·26) = 1.179e-9, which then governs.
         AppliedTolerance t = Check(ToleranceSpec.Create(1e-12, 0, 0), V(0, 0, 0), RuleOriginal(), RuleSubstitute()).Tolerance!;
         Assert.Equal(AllowanceSource.Relative, t.ForceGovernedBy);
         Assert.Equal(1e-12 * 45, t.Force);

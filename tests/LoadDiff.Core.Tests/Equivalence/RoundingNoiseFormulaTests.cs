@@ -8,8 +8,8 @@ namespace LoadDiff.Core.Tests.Equivalence;
 
 /// <summary>
 /// <see cref="RoundingNoise"/> against its documented formula (DEVELOPERS.md, "How the mechanics are done"): 1e-12 times the
-/// larger gross force, and 1e-12 times the larger of Σ|C| + G_F·reach over the two systems, reach being the diagonal of the
-/// union box plus the larger distance of its two extreme corners from the origin. Boxes, gross forces and distances are
+/// smaller gross force, and 1e-12 times the smaller of Σ|C| + G_F·reach over the two systems, reach being the diagonal of
+/// the system's own loaded box plus the larger distance of its two extreme corners from the origin. Boxes, gross forces and distances are
 /// worked by hand (3-4-5 and 6-8-10 triangles); the products are the test's own arithmetic.
 /// </summary>
 public class RoundingNoiseFormulaTests
@@ -21,38 +21,40 @@ public class RoundingNoiseFormulaTests
     private static PointForce Down(string id, Vector3 at, double fz) => new(id, at, V(0, 0, -fz));
 
     [Fact]
-    public void Of_two_systems_uses_the_larger_gross_force_and_the_union_box_reach()
+    public void Of_two_systems_uses_the_smaller_gross_force_and_each_systems_own_reach()
     {
-        // a: 10 kN at (0, 0, 0) and at (3, 4, 0): G_F = 20. b: 5 kN at (3, 0, 0): G_F = 5. Union box (0, 0, 0) … (3, 4, 0):
-        // diagonal 5, |Min| = 0, |Max| = 5, so reach = 5 + 5 = 10. Moment: max(0 + 20·10, 0 + 5·10) = 200.
+        // a: 10 kN at (0, 0, 0) and at (3, 4, 0): G_F = 20, box diagonal 5, |Max| = 5, reach 10, 20·10 = 200.
+        // b: 5 kN at (3, 0, 0): G_F = 5, a point box 3 from the origin, reach 3, 5·3 = 15. Smaller: force 5, moment 15.
         LoadReduction a = Reduce.About(Vector3.Zero, Down("p", V(0, 0, 0), 10), Down("q", V(3, 4, 0), 10));
         LoadReduction b = Reduce.About(Vector3.Zero, Down("r", V(3, 0, 0), 5));
         RoundingNoise n = RoundingNoise.Of(a, b);
-        Close.Relative(Threshold * 20, n.Force, 1e-15);
-        Close.Relative(Threshold * 200, n.Moment, 1e-15);
+        Close.Relative(Threshold * 5, n.Force, 1e-15);
+        Close.Relative(Threshold * 15, n.Moment, 1e-15);
         Assert.Equal(n, RoundingNoise.Of(b, a)); // the order of the files does not matter (SPEC §4)
     }
 
     [Fact]
     public void Of_two_systems_measures_reach_from_the_corner_farther_from_the_origin_and_counts_couples()
     {
-        // x: 1 kN at the origin. y: 10 kN at (−6, −8, 0) and a couple (0, 0, 7). Union box (−6, −8, 0) … (0, 0, 0):
-        // diagonal 10, |Min| = 10, |Max| = 0, reach 20. Moment: max(0 + 1·20, 7 + 10·20) = 207; force: max(1, 10) = 10.
+        // x: 1 kN at the origin: reach 0, moment scale 0. y: 10 kN at (−6, −8, 0) and a couple (0, 0, 7): reach 0 + 10,
+        // 7 + 10·10 = 107. Smaller: moment 0; force min(1, 10) = 1.
         LoadReduction x = Reduce.About(Vector3.Zero, Down("p", Vector3.Zero, 1));
         LoadReduction y = Reduce.About(Vector3.Zero, Down("q", V(-6, -8, 0), 10), new FreeCouple("c", V(0, 0, 7)));
         RoundingNoise n = RoundingNoise.Of(x, y);
-        Close.Relative(Threshold * 10, n.Force, 1e-15);
-        Close.Relative(Threshold * 207, n.Moment, 1e-15);
+        Close.Relative(Threshold * 1, n.Force, 1e-15);
+        Assert.Equal(0, n.Moment);
         Assert.Equal(n, RoundingNoise.Of(y, x));
     }
 
     [Fact]
-    public void Of_two_systems_without_geometry_is_the_couples_alone()
+    public void Of_two_systems_without_geometry_is_the_smaller_couple_sum()
     {
         LoadReduction x = Reduce.About(Vector3.Zero, new FreeCouple("c", V(0, 3, 4)));
-        RoundingNoise n = RoundingNoise.Of(x, Reduce.About(Vector3.Zero));
+        LoadReduction y = Reduce.About(Vector3.Zero, new FreeCouple("d", V(0, 6, 8)));
+        Assert.Equal(new RoundingNoise(0, 0), RoundingNoise.Of(x, Reduce.About(Vector3.Zero))); // an empty system has no noise
+        RoundingNoise n = RoundingNoise.Of(x, y);
         Assert.Equal(0, n.Force);
-        Close.Relative(Threshold * 5, n.Moment, 1e-15); // |(0, 3, 4)| = 5
+        Close.Relative(Threshold * 5, n.Moment, 1e-15); // min(|(0, 3, 4)|, |(0, 6, 8)|) = 5
     }
 
     [Fact]

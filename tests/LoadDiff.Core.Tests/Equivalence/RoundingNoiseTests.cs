@@ -7,9 +7,9 @@ using LoadDiff.Core.Tests.Support;
 namespace LoadDiff.Core.Tests.Equivalence;
 
 /// <summary>
-/// The rounding-noise floor, worked by hand from its definition (RoundingNoise, SPEC §4): 1e-12 times the larger gross
-/// force, and 1e-12 times the larger Σ|C| + G_F·reach, reach = the union box's diagonal plus its largest corner
-/// distance from the origin. The 1e-12 is the project's rounding threshold (WrenchAnalysis.RoundingThreshold), not an
+/// The rounding-noise floor, worked by hand from its definition (RoundingNoise, SPEC §4): 1e-12 times the smaller gross
+/// force, and 1e-12 times the smaller Σ|C| + G_F·reach, reach = a system's own loaded box diagonal plus its largest
+/// corner distance from the origin (the smaller, so that neither file can widen the floor). The 1e-12 is the project's rounding threshold (WrenchAnalysis.RoundingThreshold), not an
 /// engineering tolerance. Every length below is a Pythagorean quadruple, so the numbers are exact.
 /// </summary>
 public class RoundingNoiseTests
@@ -23,48 +23,49 @@ public class RoundingNoiseTests
     // b: |(2,6,9)| = 11 at (4,6,12): G_F = 11.
     private static LoadReduction B(Vector3 couple) => Reduce.About(V(0, 0, 0), new PointForce("r", V(4, 6, 12), V(2, 6, 9)), new FreeCouple("c", couple));
 
-    // Union box (−2,−3,−6)…(4,6,12): diagonal |(6,9,18)| = 21, |min| = 7, |max| = |(4,6,12)| = 14, so reach = 21 + 14 = 35.
+    // a's box (−2,−3,−6)…(2,3,6): diagonal |(4,6,12)| = 14, largest corner 7, reach 21; b's box is the point (4,6,12):
+    // diagonal 0, |(4,6,12)| = 14, reach 14.
 
     [Fact]
-    public void Of_twoReductions_substituteGovernsBoth()
+    public void Of_twoReductions_theSmallerOfEachGoverns()
     {
-        // a: Σ|C| = |(1,4,8)| = 9, 9 + 10·35 = 359; b: Σ|C| = |(1,2,2)| = 3, 3 + 11·35 = 388.
+        // a: Σ|C| = |(1,4,8)| = 9, 9 + 10·21 = 219; b: Σ|C| = |(1,2,2)| = 3, 3 + 11·14 = 157. Force: min(10, 11) = 10.
         RoundingNoise n = RoundingNoise.Of(A(V(1, 4, 8)), B(V(1, 2, 2)));
-        Assert.Equal(1e-12 * 11, n.Force);
-        Assert.Equal(1e-12 * 388, n.Moment);
+        Assert.Equal(1e-12 * 10, n.Force);
+        Assert.Equal(1e-12 * 157, n.Moment);
     }
 
     [Fact]
-    public void Of_twoReductions_originalGovernsTheMoment_andTheOrderDoesNotMatter()
+    public void Of_twoReductions_aLargerCoupleWidensNothing_andTheOrderDoesNotMatter()
     {
-        // a: Σ|C| = |(18,54,81)| = 99, 99 + 10·35 = 449 > b's 388; the force noise is still b's 11.
+        // a: Σ|C| = |(18,54,81)| = 99, 99 + 10·21 = 309 > b's 157, so b's 157 stays; the force noise is a's 10.
         RoundingNoise n = RoundingNoise.Of(A(V(18, 54, 81)), B(V(1, 2, 2)));
-        Assert.Equal(1e-12 * 11, n.Force);
-        Assert.Equal(1e-12 * 449, n.Moment);
+        Assert.Equal(1e-12 * 10, n.Force);
+        Assert.Equal(1e-12 * 157, n.Moment);
         Assert.Equal(n, RoundingNoise.Of(B(V(1, 2, 2)), A(V(18, 54, 81))));
     }
 
     [Fact]
     public void Of_bothSystemsMirroredThroughTheOrigin_sameNoise()
     {
-        // Negating every position: the union box becomes (−4,−6,−12)…(2,3,6), whose far corner from the origin is now
-        // its Min (|min| = 14, |max| = 7); diagonal and reach are unchanged (21 + 14 = 35), so the noise is as before.
+        // Negating every position: the union box becomes (−4,−6,−12)…(2,3,6); each system's own box keeps its diagonal
+        // and its far corner's distance (a: 14 + 7, b: 0 + 14), so the noise is as before.
         static LoadItem Mirror(LoadItem i) => Systems.Map(i, v => -v, Vector3.Zero);
         LoadReduction a = Reduce.About(V(0, 0, 0), new PointForce("p", V(2, 3, 6), V(1, 2, 2)), new PointForce("q", V(-2, -3, -6), V(2, 3, 6)), new FreeCouple("c", V(1, 4, 8)));
         LoadReduction b = Reduce.About(V(0, 0, 0), Mirror(new PointForce("r", V(4, 6, 12), V(2, 6, 9))), new FreeCouple("c", V(1, 2, 2)));
         Assert.Equal(new Box(V(-4, -6, -12), V(2, 3, 6)), Box.Union(a.Bounds, b.Bounds));
         RoundingNoise n = RoundingNoise.Of(a, b);
-        Assert.Equal(1e-12 * 11, n.Force);
-        Assert.Equal(1e-12 * 388, n.Moment); // b: 3 + 11·35
+        Assert.Equal(1e-12 * 10, n.Force);
+        Assert.Equal(1e-12 * 157, n.Moment); // b: 3 + 11·14
     }
 
     [Fact]
-    public void Of_boxOfOneSystemOnly_isTheUnion()
+    public void Of_boxOfOneSystemOnly_theCouplesOnlySystemGoverns()
     {
-        // b alone has a box; a is couples only (no box): reach = 0 + |(4,6,12)| = 14; a: 9, b: 3 + 11·14 = 157.
+        // b alone has a box (3 + 11·14 = 157); a is couples only (no box): 9. The smaller, 9, in either order.
         LoadReduction couples = Reduce.About(V(0, 0, 0), new FreeCouple("c", V(1, 4, 8)));
-        Assert.Equal(1e-12 * 157, RoundingNoise.Of(couples, B(V(1, 2, 2))).Moment);
-        Assert.Equal(1e-12 * 157, RoundingNoise.Of(B(V(1, 2, 2)), couples).Moment);
+        Assert.Equal(1e-12 * 9, RoundingNoise.Of(couples, B(V(1, 2, 2))).Moment);
+        Assert.Equal(1e-12 * 9, RoundingNoise.Of(B(V(1, 2, 2)), couples).Moment);
         // neither has a box: reach 0, only the couples remain
         Assert.Equal(1e-12 * 9, RoundingNoise.Of(couples, couples).Moment);
         Assert.Equal(0, RoundingNoise.Of(couples, couples).Force);
