@@ -22,8 +22,8 @@ public sealed record SectionGateCase(
 {
     /// <summary>
     /// What rounding alone can make of a cut moment here (force × length): <see cref="Reduction.WrenchAnalysis.RoundingThreshold"/>
-    /// times the largest cut force times the largest distance of a cut point from the origin plus the station span, plus the
-    /// threshold times the largest cut moment. The allowance never falls below it, so two copies of one load set written in
+    /// times the original's largest cut force times the largest distance of a cut point from the origin plus the length of
+    /// its extent, plus the threshold times its largest cut moment, all at the stations within the original's own extent. The allowance never falls below it, so two copies of one load set written in
     /// different units never fail on rounding (an original whose loads sit at one station has a peak of 0).
     /// </summary>
     public double RoundingFloor { get; init; }
@@ -49,22 +49,22 @@ public sealed record SectionGateCase(
         };
     }
 
+    // From the original alone, at the stations within its own loaded extent: a substitute load far along the axis
+    // (however small) must not widen the floor the way it must not widen the peak.
     private static double Floor(SectionComparison comparison)
     {
-        IReadOnlyList<SectionStation> st = comparison.Stations;
-        if (st.Count == 0)
+        if (comparison.OriginalExtent is not { } extent)
         {
             return 0;
         }
         double force = 0, moment = 0, reach = 0;
-        foreach (SectionStation x in st)
+        foreach (SectionStation x in comparison.Stations.Where(x => x.S >= extent.Min && x.S <= extent.Max))
         {
-            force = Math.Max(force, Math.Max(x.Original.Force.Length, x.Substitute.Force.Length));
-            moment = Math.Max(moment, Math.Max(x.Original.Moment.Length, x.Substitute.Moment.Length));
+            force = Math.Max(force, x.Original.Force.Length);
+            moment = Math.Max(moment, x.Original.Moment.Length);
             reach = Math.Max(reach, x.Original.ReferencePoint.Length);
         }
-        double span = st[^1].S - st[0].S;
-        return Reduction.WrenchAnalysis.RoundingThreshold * ((force * (reach + span)) + moment);
+        return Reduction.WrenchAnalysis.RoundingThreshold * ((force * (reach + (extent.Max - extent.Min))) + moment);
     }
 
     /// <inheritdoc/>

@@ -86,11 +86,11 @@ public static class SectionProfile
         else
         {
             // An even station a few ulps from a boundary would show the load on the wrong side of a near-duplicate
-            // station: the boundary replaces it.
+            // station: the boundary replaces it. Boundaries never replace each other (a far load makes "near" large).
             double near = 1e-9 * Math.Max(to - from, Math.Max(Math.Abs(from), Math.Abs(to)));
             foreach (double b in boundaries)
             {
-                set.RemoveWhere(x => x != b && Math.Abs(x - b) <= near);
+                set.RemoveWhere(x => !boundaries.Contains(x) && Math.Abs(x - b) <= near);
                 set.Add(b);
             }
         }
@@ -140,19 +140,17 @@ public static class SectionProfile
             }
             else if (HalfSpaceClip.StationRange(item, axis) is { } r)
             {
-                located.Add((item, r.Min, r.Max));
+                // Geometry within rounding of a cut counts as on the cut, so a load that lies in the cut plane is on the
+                // same side whether it comes whole or in pieces; clipping itself stays at s. The rounding of a station
+                // grows with the point's distance from the axis origin, so each item's own reach sets its tolerance (a
+                // shared one would let one load far away put every other load within metres "on the cut").
+                double reach = 0;
+                item.VisitGeometry(p => reach = Math.Max(reach, (p - axis.Origin).Length));
+                located.Add((item, r.Min, r.Max - (1e-12 * reach)));
             }
         }
         couple = couples.Value;
-        // Geometry within rounding of a cut (1e-12 of its reach along the axis) counts as on the cut, so a load that
-        // lies in the cut plane is on the same side whether it comes whole or in pieces; clipping itself stays at s.
-        // (the rounding of a station grows with the point's distance from the axis origin, not with the station)
-        double reach = 0;
-        foreach (var x in located)
-        {
-            x.Item.VisitGeometry(p => reach = Math.Max(reach, (p - axis.Origin).Length));
-        }
-        double onCut = 1e-12 * reach;
+        // Max is the item's highest station less its rounding: the item lies wholly behind every cut at or past it.
         var byMax = located.OrderBy(x => x.Max).ToArray();
         var byMin = located.OrderBy(x => x.Min).ToArray();
         var whole = new ReductionAccumulator();
@@ -163,8 +161,7 @@ public static class SectionProfile
         {
             double s = stations[i];
             Vector3 cut = axis.PointAt(s);
-            double sOn = s + onCut;
-            while (nextWhole < byMax.Length && byMax[nextWhole].Max <= sOn)
+            while (nextWhole < byMax.Length && byMax[nextWhole].Max <= s)
             {
                 whole.Add(byMax[nextWhole++].Item);
             }
@@ -172,7 +169,7 @@ public static class SectionProfile
             {
                 cutThrough.Add(byMin[nextStarted++]);
             }
-            cutThrough.RemoveAll(x => x.Max <= sOn);
+            cutThrough.RemoveAll(x => x.Max <= s);
             var part = new ReductionAccumulator();
             foreach (var x in cutThrough)
             {

@@ -24,22 +24,35 @@ public class SectionGateCaseTests
     private static readonly LoadItem[] Heavier = [new PointForce("s", V(2, 0, 0), V(0, 0, -25))];
 
     [Fact]
-    public void The_rounding_floor_follows_the_largest_cut_force_and_moment_of_either_system()
+    public void The_rounding_floor_follows_the_originals_largest_cut_force_and_moment_over_its_own_loads()
     {
-        // Largest cut force: the substitute's 25 kN (s ≥ 2; the original's is at most 20). Largest cut moment: the substitute's
-        // 25·(3 − 2) = 25 kN·m at s = 3 (the original's 10·(3 − 1) = 20). The farthest cut point is (3, 0, 0), 3 m from the
-        // origin; the stations span 3 − 1 = 2 m. Floor = 1e-12 × (25 × (3 + 2) + 25) = 1.5e-10 kN·m (1e-12: the rounding
-        // threshold, DEVELOPERS.md).
+        // Over the original's extent s = 1 … 3: its largest cut force is 20 kN (s ≥ 3), its largest cut moment
+        // 10·(3 − 1) = 20 kN·m at s = 3; the farthest cut point is (3, 0, 0), 3 m from the origin; the extent is 2 m long.
+        // Floor = 1e-12 × (20 × (3 + 2) + 20) = 1.2e-10 kN·m (1e-12: the rounding threshold, DEVELOPERS.md). The
+        // substitute's larger 25 kN does not count: the system under check cannot widen its own floor.
         SectionComparison comparison = Compare(Original, Heavier);
         Assert.Equal(1, comparison.Stations[0].S);
         Assert.Equal(3, comparison.Stations[^1].S);
         SectionGateCase c = SectionGateCase.Evaluate("G", EntryKind.Case, comparison, 0.05);
-        Close.Relative(1e-12 * ((25 * (3 + 2)) + 25), c.RoundingFloor, 1e-9);
+        Close.Relative(1e-12 * ((20 * (3 + 2)) + 20), c.RoundingFloor, 1e-9);
         // The allowance: 0.05 × the original's peak over its own loads, 10·(3 − 1) = 20 kN·m, is 1 kN·m.
         Close.Relative(1, c.AllowedMoment, 1e-14);
         // |ΔM(2)| = |25·0 − 10·1| = 10 kN·m is the largest deviation (|ΔM| = 10·(s − 1) before, |15·s − 40| after).
         Close.Relative(10, c.MaxMomentDeviation, 1e-14);
         Assert.False(c.Passes);
+    }
+
+    [Fact]
+    public void A_tiny_substitute_load_far_along_the_axis_widens_no_floor()
+    {
+        // Original −10 kN at x = 0 and x = 2, substitute −20 kN at x = 1 (|ΔM| = 10 kN·m at s = 1, allowed 0.05 × 20 = 1,
+        // SectionGateVerdictTests) plus −1e-18 kN at x = 1e12: the stations now run to 1e12, which once made the floor
+        // 1e-12 × 20 kN × 1e12 m = 20 kN·m and passed the gate.
+        LoadItem[] original = [new PointForce("a", V(0, 0, 0), V(0, 0, -10)), new PointForce("b", V(2, 0, 0), V(0, 0, -10))];
+        LoadItem[] substitute = [new PointForce("s", V(1, 0, 0), V(0, 0, -20)), new PointForce("far", V(1e12, 0, 0), V(0, 0, -1e-18))];
+        SectionGateCase c = SectionGateCase.Evaluate("G", EntryKind.Case, Compare(original, substitute), 0.05);
+        Assert.False(c.Passes, c.ToString());
+        Close.Relative(1, c.AllowedMoment, 1e-12);
     }
 
     [Fact]
