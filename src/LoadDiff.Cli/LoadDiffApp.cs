@@ -47,6 +47,11 @@ public static class LoadDiffApp
         {
             return ExitCodes.InputError;
         }
+        catch (LoadDiff.Formats.Diagnostics.UnreadableInputException e)
+        {
+            error.WriteLine(e.Diagnostic.ToString());
+            return ExitCodes.InputError;
+        }
         catch (UsageException e)
         {
             error.WriteLine("loaddiff: " + e.Message);

@@ -53,6 +53,11 @@ public static class DiffHtmlRenderer
             {
                 string fields = string.Join("<br>", i.Fields.Select(c =>
                     $"{H(c.Field)}: <code>{H(c.Old ?? "—")}</code> → <code>{H(c.New ?? "—")}</code> {H(c.Unit)}"));
+                foreach (DataChange data in i.Data)
+                {
+                    fields += "<br>" + H(DiffWords.DataHeading(data)) + "<ul class=\"rows\">"
+                        + string.Concat(data.Shown.Select(r => $"<li class=\"{DiffWords.Change(r.Change)}\">{H(DiffWords.Row(r, f, m))}</li>")) + "</ul>";
+                }
                 w.WriteLine($"<tr class=\"{DiffWords.Change(i.Change)}\"><td>{H(i.Case)}</td><td><code>{H(i.Id)}</code> ({H(i.Kind)}){(i.DerivedId ? " derived key" : "")}</td>"
                     + $"<td>{DiffWords.Change(i.Change)}</td><td>{fields}</td><td class=\"num\">{H(DiffWords.Vec(i.DeltaForce))}</td><td class=\"num\">{H(DiffWords.Vec(i.DeltaMoment))}</td></tr>");
             }
@@ -61,12 +66,17 @@ public static class DiffHtmlRenderer
         w.WriteLine($"<h2>Resultants</h2><table><tr><th>name</th><th>kind</th><th>R before ({H(f)})</th><th>R after</th><th>ΔR</th><th>M before ({H(m)})</th><th>M after</th><th>ΔM</th></tr>");
         foreach (ResultantChange r in d.Resultants)
         {
+            if (r.NotShown is { } why)
+            {
+                w.WriteLine($"<tr><td>{H(r.Name)}</td><td>{(r.Kind == Core.Model.EntryKind.Case ? "case" : "combination")}</td><td colspan=\"6\">{H(why)}</td></tr>");
+                continue;
+            }
             w.WriteLine($"<tr><td>{H(r.Name)}</td><td>{(r.Kind == Core.Model.EntryKind.Case ? "case" : "combination")}</td>"
                 + $"<td class=\"num\">{(r.Old is { } o ? H(DiffWords.Vec(o.Force)) : "—")}</td><td class=\"num\">{(r.New is { } n ? H(DiffWords.Vec(n.Force)) : "—")}</td><td class=\"num\">{H(DiffWords.Vec(r.DeltaForce))}</td>"
                 + $"<td class=\"num\">{(r.Old is { } o2 ? H(DiffWords.Vec(o2.Moment)) : "—")}</td><td class=\"num\">{(r.New is { } n2 ? H(DiffWords.Vec(n2.Moment)) : "—")}</td><td class=\"num\">{H(DiffWords.Vec(r.DeltaMoment))}</td></tr>");
         }
         w.WriteLine("</table>");
-        IReadOnlyList<ListingLine> lines = ListingDiff.Lines(d.OldListing, d.NewListing);
+        IReadOnlyList<ListingLine> lines = d.HasListings ? ListingDiff.Lines(d.OldListing, d.NewListing) : [];
         if (lines.Count > 0)
         {
             w.WriteLine("<h2>Canonical listing diff</h2>" + (d.ListingSignificantDigits is null ? "" : "<p>" + H(DiffWords.ListingBasis(d)) + "</p>") + "<pre class=\"listing\">");

@@ -62,6 +62,12 @@ public static class DiffJsonWriter
             w.WriteEndArray();
             JsonOut.Vector(w, "delta_force", i.DeltaForce);
             JsonOut.Vector(w, "delta_moment", i.DeltaMoment);
+            w.WriteStartArray("data");
+            foreach (DataChange data in i.Data)
+            {
+                WriteData(w, data);
+            }
+            w.WriteEndArray();
             w.WriteEndObject();
         }
         w.WriteEndArray();
@@ -71,10 +77,19 @@ public static class DiffJsonWriter
             w.WriteStartObject();
             w.WriteString("name", r.Name);
             w.WriteString("kind", r.Kind == Core.Model.EntryKind.Case ? "case" : "combination");
-            WriteSystem(w, "old", r.Old);
-            WriteSystem(w, "new", r.New);
-            JsonOut.Vector(w, "delta_force", r.DeltaForce);
-            JsonOut.Vector(w, "delta_moment", r.DeltaMoment);
+            w.WriteString("not_shown", r.NotShown);
+            WriteSystem(w, "old", r.NotShown is null ? r.Old : null);
+            WriteSystem(w, "new", r.NotShown is null ? r.New : null);
+            if (r.NotShown is null)
+            {
+                JsonOut.Vector(w, "delta_force", r.DeltaForce);
+                JsonOut.Vector(w, "delta_moment", r.DeltaMoment);
+            }
+            else
+            {
+                w.WriteNull("delta_force");
+                w.WriteNull("delta_moment");
+            }
             w.WriteBoolean("unchanged", r.Unchanged);
             w.WriteEndObject();
         }
@@ -86,7 +101,8 @@ public static class DiffJsonWriter
         }
         w.WriteEndArray();
         var text = new System.Text.StringBuilder();
-        foreach (ListingLine l in ListingDiff.Lines(d.OldListing, d.NewListing))
+        w.WriteBoolean("has_listings", d.HasListings);
+        foreach (ListingLine l in d.HasListings ? ListingDiff.Lines(d.OldListing, d.NewListing) : [])
         {
             text.Append(l.Tag == '@' ? l.Text : l.Tag + l.Text).Append('\n');
         }
@@ -100,6 +116,44 @@ public static class DiffJsonWriter
             w.WriteNull("listing_significant_digits");
         }
         w.WriteString("caution", DiffWords.Caution);
+        w.WriteEndObject();
+    }
+
+    private static void WriteData(Utf8JsonWriter w, DataChange c)
+    {
+        w.WriteStartObject();
+        w.WriteString("table", c.Table);
+        w.WriteString("old_file", c.OldFile);
+        w.WriteString("new_file", c.NewFile);
+        w.WriteString("matched_by", c.MatchedBy);
+        w.WriteNumber("old_rows", c.OldRows);
+        w.WriteNumber("new_rows", c.NewRows);
+        w.WriteNumber("changed", c.Changed);
+        w.WriteNumber("added", c.Added);
+        w.WriteNumber("removed", c.Removed);
+        w.WriteStartArray("rows");
+        foreach (RowChange r in c.Shown)
+        {
+            w.WriteStartObject();
+            w.WriteString("key", r.Key);
+            w.WriteString("change", DiffWords.Change(r.Change));
+            w.WriteNumber("old_line", r.OldLine);
+            w.WriteNumber("new_line", r.NewLine);
+            w.WriteString("old", r.Old);
+            w.WriteString("new", r.New);
+            if (r.DeltaForce is { } df && r.DeltaMoment is { } dm)
+            {
+                JsonOut.Vector(w, "delta_force", df);
+                JsonOut.Vector(w, "delta_moment", dm);
+            }
+            else
+            {
+                w.WriteNull("delta_force");
+                w.WriteNull("delta_moment");
+            }
+            w.WriteEndObject();
+        }
+        w.WriteEndArray();
         w.WriteEndObject();
     }
 

@@ -47,6 +47,11 @@ public static class DiffMarkdownRenderer
                         _ => $"{Esc(c.Field)}: {Code(c.Old, u)} → {Code(c.New, u)}",
                     };
                 }));
+                foreach (DataChange data in i.Data)
+                {
+                    fields += "<br>" + Esc(DiffWords.DataHeading(data));
+                    fields += string.Concat(data.Shown.Select(r => "<br>• " + Esc(DiffWords.Row(r, f, m))));
+                }
                 string id = "`" + Esc(i.Id) + "`" + (i.DerivedId ? " (derived key)" : "");
                 w.WriteLine($"| {Esc(i.Case)} | {id} ({Esc(i.Kind)}) | {DiffWords.Change(i.Change)} | {fields} | {DiffWords.Vec(i.DeltaForce)} | {DiffWords.Vec(i.DeltaMoment)} |");
             }
@@ -56,11 +61,16 @@ public static class DiffMarkdownRenderer
         w.WriteLine("|---|---|---|---|---|---|---|---|");
         foreach (ResultantChange r in d.Resultants)
         {
+            if (r.NotShown is { } why)
+            {
+                w.WriteLine($"| {Esc(r.Name)} | {(r.Kind == Core.Model.EntryKind.Case ? "case" : "combination")} | {Esc(why)} | | | | | |");
+                continue;
+            }
             w.WriteLine($"| {Esc(r.Name)} | {(r.Kind == Core.Model.EntryKind.Case ? "case" : "combination")} | "
                 + $"{(r.Old is { } o ? DiffWords.Vec(o.Force) : "—")} | {(r.New is { } n ? DiffWords.Vec(n.Force) : "—")} | {DiffWords.Vec(r.DeltaForce)} | "
                 + $"{(r.Old is { } o2 ? DiffWords.Vec(o2.Moment) : "—")} | {(r.New is { } n2 ? DiffWords.Vec(n2.Moment) : "—")} | {DiffWords.Vec(r.DeltaMoment)} |");
         }
-        IReadOnlyList<ListingLine> lines = ListingDiff.Lines(d.OldListing, d.NewListing);
+        IReadOnlyList<ListingLine> lines = d.HasListings ? ListingDiff.Lines(d.OldListing, d.NewListing) : [];
         if (lines.Count > 0)
         {
             w.WriteLine();

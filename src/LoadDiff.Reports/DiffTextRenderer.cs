@@ -13,7 +13,7 @@ public static class DiffTextRenderer
         ArgumentNullException.ThrowIfNull(d);
         ArgumentNullException.ThrowIfNull(w);
         string f = d.Units.Force.Symbol, m = d.Units.MomentSymbol;
-        string Paint(string s, string code) => colour ? code + s + Reset : s;
+        string Paint(string s, string code) => colour && code.Length > 0 ? code + s + Reset : s;
         w.WriteLine("Load description diff");
         w.WriteLine($"  old:    {d.OldName}");
         w.WriteLine($"  new:    {d.NewName}");
@@ -51,12 +51,23 @@ public static class DiffTextRenderer
                         _ => $"      {c.Field}: {c.Old ?? "(absent)"} → {c.New ?? "(absent)"}{unit}",
                     });
                 }
+                foreach (DataChange data in i.Data)
+                {
+                    w.WriteLine("      " + DiffWords.DataHeading(data));
+                    foreach (RowChange r in data.Shown)
+                    {
+                        string mark2 = r.Change switch { ChangeKind.Added => "+", ChangeKind.Removed => "-", _ => "~" };
+                        w.WriteLine(Paint($"        {mark2} {DiffWords.Row(r, f, m)}", r.Change switch { ChangeKind.Added => Green, ChangeKind.Removed => Red, _ => "" }));
+                    }
+                }
                 w.WriteLine($"      contribution ΔR_i = {DiffWords.Vec(i.DeltaForce)} {f}   ΔM_i = {DiffWords.Vec(i.DeltaMoment)} {m}");
             }
         }
         w.WriteLine();
         w.WriteLine($"Resultants about {DiffWords.Point(d)}");
-        var rows = d.Resultants.Select(r => new[]
+        var rows = d.Resultants.Select(r => r.NotShown is { } why
+            ? [r.Name, r.Kind == Core.Model.EntryKind.Case ? "case" : "combination", why, "", "", "", "", ""]
+            : new[]
         {
             r.Name, r.Kind == Core.Model.EntryKind.Case ? "case" : "combination",
             r.Old is { } o ? DiffWords.Vec(o.Force) : "(absent)", r.New is { } n ? DiffWords.Vec(n.Force) : "(absent)", DiffWords.Vec(r.DeltaForce),
@@ -72,7 +83,11 @@ public static class DiffTextRenderer
         }
         IReadOnlyList<ListingLine> lines = ListingDiff.Lines(d.OldListing, d.NewListing);
         w.WriteLine();
-        if (lines.Count == 0)
+        if (!d.HasListings)
+        {
+            w.WriteLine("CSV tables have no canonical listing: their rows are compared above.");
+        }
+        else if (lines.Count == 0)
         {
             w.WriteLine(d.ListingSignificantDigits is null ? "Canonical listings: identical." : $"Canonical listings identical, {DiffWords.ListingBasis(d)}.");
         }

@@ -54,5 +54,37 @@ public static class DiffWords
     /// <summary>The noise threshold for readable numbers of a vector difference: zero (differences are exact).</summary>
     public static string Vec(Vector3 v) => NumberText.Readable(v);
 
+    /// <summary>One referenced table's row changes in a line: what was matched how, and the counts.</summary>
+    public static string DataHeading(DataChange c)
+    {
+        ArgumentNullException.ThrowIfNull(c);
+        string files = c.OldFile == c.NewFile ? c.OldFile : c.OldFile + " → " + c.NewFile;
+        string shown = c.Shown.Count < c.Differing ? $"; the first {c.Shown.Count} shown" : "";
+        return $"rows of the {c.Table} {files} (matched by {c.MatchedBy}){shown}:";
+    }
+
+    /// <summary>One row change in a line: its key and lines, old → new, and its own ΔR_i, ΔM_i where a row has them.</summary>
+    public static string Row(RowChange r, string forceUnit, string momentUnit)
+    {
+        ArgumentNullException.ThrowIfNull(r);
+        static string Line(long n) => n.ToString(System.Globalization.CultureInfo.InvariantCulture);
+        string where = r.Change switch
+        {
+            ChangeKind.Added => "line " + Line(r.NewLine),
+            ChangeKind.Removed => "line " + Line(r.OldLine),
+            _ => r.OldLine == r.NewLine ? "line " + Line(r.OldLine) : $"line {Line(r.OldLine)} → {Line(r.NewLine)}",
+        };
+        string values = r.Change switch
+        {
+            ChangeKind.Added => r.New!,
+            ChangeKind.Removed => r.Old!,
+            _ => $"{r.Old} → {r.New}",
+        };
+        string delta = r.DeltaForce is { } df && r.DeltaMoment is { } dm ? $"; ΔR_i = {Vec(df)} {forceUnit}, ΔM_i = {Vec(dm)} {momentUnit}" : "";
+        return $"{Change(r.Change)} {r.Key} ({where}): {values}{delta}";
+    }
+
+    private static string Count(long n) => n.ToString(System.Globalization.CultureInfo.InvariantCulture) + (n == 1 ? " row" : " rows");
+
     private static string S(int n) => n == 1 ? "" : "s";
 }

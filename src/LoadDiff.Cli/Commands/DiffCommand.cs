@@ -69,7 +69,14 @@ public static class DiffCommand
             {
                 throw new UsageException("only one of OLD and NEW can be read from standard input");
             }
-            DocumentDiff diff = Compare(args[0], Open(args[0], null), args[1], Open(args[1], null), selected, parse.GetValue(at), error, out _);
+            bool oldTable = IsTable(args[0]), newTable = IsTable(args[1]);
+            if (oldTable != newTable)
+            {
+                throw new UsageException($"diff compares two load documents or two CSV tables; '{(oldTable ? args[0] : args[1])}' is a CSV table and "
+                    + $"'{(oldTable ? args[1] : args[0])}' is not");
+            }
+            DocumentDiff diff = oldTable ? CompareTables(args[0], args[0], args[1], args[1], parse.GetValue(at), error)
+                : Compare(args[0], Open(args[0], null), args[1], Open(args[1], null), selected, parse.GetValue(at), error, out _);
             Render(diff, parse.GetValue(format)!, output, colour);
             return diff.HasDifferences ? ExitCodes.Different : ExitCodes.Success;
         });
@@ -80,14 +87,29 @@ public static class DiffCommand
     {
         /// <summary>The revision a <c>REV:PATH</c> operand was read from; its referenced files come from it too.</summary>
         public GitSource? Revision { get; init; }
+
+        /// <summary>True when the document is read without the CSV tables it references (git's external diff gives the document only).</summary>
+        public bool WithoutTables { get; init; }
+    }
+
+    private static bool IsTable(string operand) => operand.EndsWith(".csv", StringComparison.OrdinalIgnoreCase);
+
+    // Two CSV tables given directly (files, REV:PATH, or git's copies): their rows, matched by id or position
+    private static DocumentDiff CompareTables(string oldName, string oldOperand, string newName, string newOperand, ReferenceChoice? at, TextWriter error)
+    {
+        LoadedFile a = LoadedFile.Read(oldOperand, null, error);
+        LoadedFile b = LoadedFile.Read(newOperand, a.Units, error);
+        Vector3 point = a.ResolvePoint(at ?? new ReferenceChoice("centroid"), out string description);
+        if (description.StartsWith("load centroid of ", StringComparison.Ordinal))
+        {
+            description = "load centroid of " + oldName;
+        }
+        return TableDiffer.Compare(oldName, a.ContentPath, a.Sink.Cases.Values.Single(), newName, b.ContentPath, b.Sink.Cases.Values.Single(),
+            a.Units, point, description);
     }
 
     private static Source Open(string operand, string? baseDirectory)
     {
-        if (operand.EndsWith(".csv", StringComparison.OrdinalIgnoreCase))
-        {
-            throw new UsageException($"'{operand}': diff compares .loads.json documents, not CSV data (use 'loaddiff check' for those)");
-        }
         if (operand == "-")
         {
             using Stream stdin = Console.OpenStandardInput();
@@ -119,12 +141,12 @@ public static class DiffCommand
             }
         }
         Vector3 point = ResolvePoint(old, at, oldName, out string description);
-        return DocumentDiffer.Compare(oldName, old, newName, @new, point, description, selected);
+        return DocumentDiffer.Compare(oldName, old, newName, @new, point, description, selected, referencedDataRead: !a.WithoutTables);
     }
 
     private static SourceReadResult Read(Source s, UnitSystem? target, TextWriter error)
     {
-        var plain = new ReadOptions { TargetUnits = target };
+        var plain = new ReadOptions { TargetUnits = target, MissingReferencedFile = s.WithoutTables ? _ => { } : null };
         ReadOptions options = s.Revision?.Options(plain) ?? plain;
         SourceReadResult r = s.Bytes is null ? LoadDocumentReader.Read(s.Name, options) : LoadDocumentReader.ReadBytes(s.Bytes, s.Name, s.BaseDirectory, options);
         FmtCommand.Report(r, error);
@@ -187,8 +209,9 @@ public static class DiffCommand
             throw new UsageException($"--git-external expects git's 7 arguments (path old-file old-hex old-mode new-file new-hex new-mode); {args.Length} given");
         }
         string path = args[0], oldFile = args[1], newFile = args[4];
-        // referenced CSV files are read from the work tree beside the path (git hands over only the JSON blobs)
-        string baseDir = Path.GetDirectoryName(Path.GetFullPath(path))!;
+        // git hands over the two versions of this one file only: a document's referenced CSV tables are not read (neither
+        // version's can be known; the working tree's would be wrong for the old side), each table shows in its own diff
+        string baseDir = Path.Combine(Path.GetTempPath(), "loaddiff-no-tables-" + Guid.NewGuid().ToString("N"));
         string oldName = "a/" + path, newName = "b/" + path;
         output.WriteLine($"loaddiff diff {oldName} {newName}");
         if (oldFile == "/dev/null" || newFile == "/dev/null")
@@ -202,19 +225,25 @@ public static class DiffCommand
             }
             return ExitCodes.Success;
         }
-        var a = new Source(oldName, File.ReadAllBytes(oldFile), baseDir);
-        var b = new Source(newName, File.ReadAllBytes(newFile), baseDir);
+        var a = new Source(oldName, File.ReadAllBytes(oldFile), baseDir) { WithoutTables = true };
+        var b = new Source(newName, File.ReadAllBytes(newFile), baseDir) { WithoutTables = true };
         var captured = new StringWriter();
         try
         {
-            DocumentDiff diff = Compare(oldName, a, newName, b, selected, at, captured, out _);
+            DocumentDiff diff = IsTable(path) ? CompareTables(oldName, oldFile, newName, newFile, at, captured)
+                : Compare(oldName, a, newName, b, selected, at, captured, out _);
             error.Write(captured.ToString());
             Render(diff, format, output, colour);
         }
-        catch (Exception e) when (e is InputFailureException or UsageException)
+        catch (Exception e) when (e is InputFailureException or UsageException or LoadDiff.Formats.Diagnostics.UnreadableInputException)
         {
             // show the trouble where the reader looks, then the plain line diff, and let git go on to the next file
-            string why = e is UsageException ? "loaddiff: " + e.Message : captured.ToString().TrimEnd();
+            string why = e switch
+            {
+                UsageException => "loaddiff: " + e.Message,
+                LoadDiff.Formats.Diagnostics.UnreadableInputException u => u.Diagnostic.ToString(),
+                _ => captured.ToString().TrimEnd(),
+            };
             error.WriteLine(why);
             output.WriteLine(why);
             output.WriteLine("(plain line diff follows)");
@@ -238,6 +267,10 @@ public static class DiffCommand
     private static int TextConv(string file, TextWriter output, TextWriter error)
     {
         byte[] bytes = File.Exists(file) ? File.ReadAllBytes(file) : throw new UsageException($"'{file}': file not found");
+        if (IsTable(file))
+        {
+            return TextConvTable(file, bytes, output);
+        }
         var absent = new HashSet<string>(StringComparer.Ordinal);
         var options = new ReadOptions { MissingReferencedFile = rel => absent.Add(rel) };
         SourceReadResult r = LoadDocumentReader.ReadBytes(bytes, TextConvName, Path.GetDirectoryName(Path.GetFullPath(file))!, options);
@@ -294,6 +327,33 @@ public static class DiffCommand
             List<string> files = [.. c.Factors.Where(x => needs.ContainsKey(x.Key)).SelectMany(x => needs[x.Key])];
             string line = files.Count > 0 ? Needs(files) : Resultant(c.Combine(r.Resultants.Cases.Cases, out _).ResultAt(Vector3.Zero));
             output.WriteLine($"// combination {c.Name}: {line}");
+        }
+        return ExitCodes.Success;
+    }
+
+    // A CSV table as it is (its lines diff well), then its row count and resultant about the origin at fixed digits
+    private static int TextConvTable(string file, byte[] bytes, TextWriter output)
+    {
+        string text = Encoding.UTF8.GetString(bytes);
+        output.Write(text);
+        if (text.Length > 0 && !text.EndsWith('\n'))
+        {
+            output.WriteLine();
+        }
+        var captured = new StringWriter();
+        try
+        {
+            LoadedFile table = LoadedFile.Read(file, null, captured);
+            ReductionAccumulator rows = table.Sink.Cases.Values.Single();
+            output.WriteLine($"// loaddiff: {rows.Count} load rows; resultant about the origin ({table.Units.Force.Symbol}, {table.Units.MomentSymbol} as written; "
+                + $"{TextConvDigits} significant digits, rounding noise printed as 0): {Resultant(rows.ResultAt(Vector3.Zero))}");
+        }
+        catch (InputFailureException)
+        {
+            string why = captured.ToString().Trim();
+            int colon = why.IndexOf(": ", StringComparison.Ordinal);
+            // the diagnostic's position without the temporary file's name, which differs from run to run
+            output.WriteLine("// loaddiff: not readable as a load table: " + (colon >= 0 ? why[(colon + 2)..] : why));
         }
         return ExitCodes.Success;
     }

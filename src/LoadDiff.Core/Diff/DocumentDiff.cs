@@ -29,6 +29,9 @@ public sealed record DocumentDiff(
     /// </summary>
     public int? ListingSignificantDigits { get; init; }
 
+    /// <summary>False when the operands were CSV tables, which have no canonical listing (their rows are diffed instead).</summary>
+    public bool HasListings { get; init; } = true;
+
     /// <summary>True when the new version was written in other units and converted into <see cref="Units"/>.</summary>
     public bool UnitsConverted => NewUnits != Units;
 

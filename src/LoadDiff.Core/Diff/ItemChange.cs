@@ -17,6 +17,9 @@ public sealed record ItemChange(
     string Case, string Id, bool DerivedId, string Kind, ChangeKind Change, IReadOnlyList<FieldChange> Fields,
     Vector3 DeltaForce, Vector3 DeltaMoment)
 {
+    /// <summary>For a mesh or forces item: the rows of each referenced CSV table that differ (empty when none do or the item has none).</summary>
+    public IReadOnlyList<DataChange> Data { get; init; } = [];
+
     /// <inheritdoc/>
     public override string ToString() => $"{Change} {Case}/{Id} ({Kind}): ΔR {DeltaForce}, ΔM {DeltaMoment}";
 }

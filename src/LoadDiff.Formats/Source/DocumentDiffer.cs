@@ -4,6 +4,7 @@ using LoadDiff.Core.Diff;
 using LoadDiff.Core.Model;
 using LoadDiff.Core.Reduction;
 using LoadDiff.Core.Units;
+using LoadDiff.Formats.Csv;
 
 namespace LoadDiff.Formats.Source;
 
@@ -20,6 +21,8 @@ public static class DocumentDiffer
     /// <summary>Significant digits of the numbers in both listings when the units differ (the same-unit listings are exact).</summary>
     public const int ConvertedListingDigits = 12;
 
+    private static readonly string[] OneTable = ["file"], TwoTables = ["vertices", "triangles"];
+
     private const double MachineEpsilon = 2.220446049250313e-16; // 2^-52, the spacing of doubles at 1
 
     /// <summary>Compares two successfully read versions.</summary>
@@ -30,8 +33,11 @@ public static class DocumentDiffer
     /// <param name="point">The reference point for moments, in the old version's units.</param>
     /// <param name="pointDescription">How the point was chosen.</param>
     /// <param name="selected">Only these cases and combinations (all when empty).</param>
+    /// <param name="options">Limits for reading the CSV tables that mesh and forces items reference (their rows are diffed); defaults when null.</param>
+    /// <param name="referencedDataRead">False when both versions were read without the CSV tables they reference (git's external
+    /// diff hands over the documents only): the resultants of the cases that need them are then not shown.</param>
     public static DocumentDiff Compare(string oldName, SourceReadResult old, string newName, SourceReadResult @new, Vector3 point,
-        string pointDescription, IReadOnlyCollection<string> selected)
+        string pointDescription, IReadOnlyCollection<string> selected, ReadOptions? options = null, bool referencedDataRead = true)
     {
         ArgumentNullException.ThrowIfNull(old);
         ArgumentNullException.ThrowIfNull(@new);
@@ -40,8 +46,18 @@ public static class DocumentDiffer
         LoadDocument bAsWritten = @new.Document ?? throw new ArgumentException("the new version was not read", nameof(@new));
         LoadDocument b = bAsWritten.ConvertTo(a.Units);
         bool converted = bAsWritten.Units != a.Units;
-        var ctx = new Context(a, b, converted);
+        var ctx = new Context(a, b, converted)
+        {
+            NewUnitsAsWritten = bAsWritten.Units,
+            TableOptions = TableReading(options),
+        };
         bool Wanted(string name) => selected.Count == 0 || selected.Contains(name);
+        Dictionary<string, List<string>> needs = referencedDataRead ? [] : TablesNeeded(a, b);
+        string? NotShown(IEnumerable<string> cases)
+        {
+            List<string> files = [.. cases.Where(needs.ContainsKey).SelectMany(c => needs[c]).Distinct()];
+            return files.Count == 0 ? null : "not shown: needs " + string.Join(", ", files.Select(SourceText.Quoted));
+        }
 
         var settings = new List<SettingChange>();
         if (a.Title != b.Title)
@@ -105,7 +121,10 @@ public static class DocumentDiffer
             items.AddRange(CompareCase(name, ca, cb, old.Resultants!, @new.Resultants!, point, ctx));
             resultants.Add(new ResultantChange(name, EntryKind.Case,
                 ca is null ? null : old.Resultants!.Cases.Cases[name].ResultAt(point).System,
-                cb is null ? null : @new.Resultants!.Cases.Cases[name].ResultAt(point).System));
+                cb is null ? null : @new.Resultants!.Cases.Cases[name].ResultAt(point).System)
+            {
+                NotShown = NotShown([name]),
+            });
         }
 
         IReadOnlyList<string> comboNames = [.. a.Combinations.Select(c => c.Name), .. b.Combinations.Select(c => c.Name).Where(n => a.Combinations.All(c => c.Name != n))];
@@ -119,7 +138,10 @@ public static class DocumentDiffer
             }
             resultants.Add(new ResultantChange(name, EntryKind.Combination,
                 ka is null ? null : ka.Combine(old.Resultants!.Cases.Cases, out _).ResultAt(point).System,
-                kb is null ? null : kb.Combine(@new.Resultants!.Cases.Cases, out _).ResultAt(point).System));
+                kb is null ? null : kb.Combine(@new.Resultants!.Cases.Cases, out _).ResultAt(point).System)
+            {
+                NotShown = NotShown([.. ka?.Factors.Select(f => f.Key) ?? [], .. kb?.Factors.Select(f => f.Key) ?? []]),
+            });
         }
 
         var notes = new List<string>();
@@ -135,7 +157,15 @@ public static class DocumentDiffer
         }
         if (a.Cases.Concat(b.Cases).Any(c => c.Items.Any(i => i.Kind is "mesh" or "forces")))
         {
-            notes.Add("mesh and forces items are compared by their file references, and the CSV data they reference by their rows (in any order) and the reduced resultant of those data; when the units differ, by the resultant only.");
+            notes.Add("mesh and forces items are compared by their file references and by the rows of the CSV tables they reference: point loads and "
+                + "mesh vertices matched by id, triangles (and point loads in a table without an id column) by their position in the file"
+                + (converted ? ", every value after exact conversion into the old version's units." : "."));
+        }
+        if (needs.Count > 0)
+        {
+            notes.Add("the CSV tables the documents reference were not read (git's external diff hands over the documents only): their rows are "
+                + "not compared here (with '*.csv diff=loaddiff' in .gitattributes each table shows in its own diff), and the resultants of the cases "
+                + "that need them are not shown; 'loaddiff diff REV1:PATH REV2:PATH' reads both versions whole.");
         }
         if (!converted)
         {
@@ -149,6 +179,32 @@ public static class DocumentDiffer
             ListingSignificantDigits = ConvertedListingDigits,
         };
     }
+
+    // case name → the files its mesh and forces items reference, in either version
+    private static Dictionary<string, List<string>> TablesNeeded(LoadDocument a, LoadDocument b)
+    {
+        var needs = new Dictionary<string, List<string>>(StringComparer.Ordinal);
+        foreach (SourceCase c in a.Cases.Concat(b.Cases))
+        {
+            foreach (SourceItem item in c.Items.Where(i => i.Kind is "mesh" or "forces"))
+            {
+                foreach (SourceField f in item.Fields.Where(f => f.Name is "file" or "vertices" or "triangles" && f.Value is TextValue))
+                {
+                    List<string> list = needs.TryGetValue(c.Name, out var l) ? l : needs[c.Name] = [];
+                    string rel = ((TextValue)f.Value).Text;
+                    if (!list.Contains(rel))
+                    {
+                        list.Add(rel);
+                    }
+                }
+            }
+        }
+        return needs;
+    }
+
+    // Equal, or (after a conversion of units) within ConvertedUlps of each other
+    internal static bool SameValue(double x, double y, bool converted) =>
+        x == y || (converted && Math.Abs(x - y) <= ConvertedUlps * MachineEpsilon * Math.Max(Math.Abs(x), Math.Abs(y)));
 
     // The converted new version for its listing: every value the comparison counts as equal (within ConvertedUlps) is
     // written as the old version has it, so a value the item diff calls unchanged can never round to other digits.
@@ -217,7 +273,13 @@ public static class DocumentDiffer
                     fields.Add(new FieldChange(field, u is null ? null : Context.Text(u, ctx.Old), v is null ? null : Context.Text(v, ctx.New), Quantities.Symbol(q, ctx.Old.Units)));
                 }
             }
-            if (fields.Count == 0 && !(ctx.Close(fa, fb) && ctx.Close(ma, mb)))
+            IReadOnlyList<DataChange> data = x.Kind == y.Kind ? CompareData(x, y, ia[i], ib[j], point, ctx) : [];
+            if (data.Any(d => d.Differing > 0))
+            {
+                string same = ctx.Close(fa, fb) && ctx.Close(ma, mb) ? "; rows differ, the item's resultant is unchanged" : "";
+                fields.Add(new FieldChange("referenced data", RowsText(data, old: true), RowsText(data, old: false) + same, ""));
+            }
+            else if (fields.Count == 0 && !(ctx.Close(fa, fb) && ctx.Close(ma, mb)))
             {
                 // same fields, different load: gravity changed under a mass, or the referenced CSV data changed
                 string why = x.Kind is "mesh" or "forces" ? "referenced data" : x.Kind == "mass" ? "weight (gravity changed)" : "load";
@@ -234,7 +296,10 @@ public static class DocumentDiffer
             }
             if (fields.Count > 0)
             {
-                list.Add(new ItemChange(name, ia[i].Key, x.Id is null, y.Kind, ChangeKind.Changed, fields, fb - fa, mb - ma));
+                list.Add(new ItemChange(name, ia[i].Key, x.Id is null, y.Kind, ChangeKind.Changed, fields, fb - fa, mb - ma)
+                {
+                    Data = [.. data.Where(d => d.Differing > 0)],
+                });
             }
         }
         for (int j = 0; cb is not null && j < cb.Items.Length; j++)
@@ -247,6 +312,47 @@ public static class DocumentDiffer
             }
         }
         return list;
+    }
+
+    // The rows of the tables a mesh or forces item references, old against new (none when either version's files were not read)
+    private static List<DataChange> CompareData(SourceItem x, SourceItem y, ItemResultant rx, ItemResultant ry, Vector3 point, Context ctx)
+    {
+        string[] Tables(SourceItem item) =>
+            item.Kind == "forces" ? [CsvLayouts.PointLoads]
+            : item["file"] is not null ? [CsvLayouts.TriangleRows]
+            : [CsvLayouts.Vertices, CsvLayouts.Triangles];
+        string[] Names(SourceItem item) =>
+            [.. (item.Kind == "forces" || item["file"] is not null ? OneTable : TwoTables).Select(k => item[k] is TextValue t ? t.Text : "?")];
+        string[] tables = Tables(x);
+        if (x.Kind is not ("mesh" or "forces") || !tables.SequenceEqual(Tables(y)) || rx.Files.Count != tables.Length || ry.Files.Count != tables.Length)
+        {
+            return [];
+        }
+        Vector3? Direction(SourceItem item) => item["direction"] is VectorValue v ? v.Value : null;
+        string[] nx = Names(x), ny = Names(y);
+        var list = new List<DataChange>();
+        for (int k = 0; k < tables.Length; k++)
+        {
+            var a = new CsvTableDiffer.Side(rx.Files[k].FullPath, rx.Files[k].Display, nx[k], new UnitConversion(ctx.Old.Units, ctx.Old.Units), Direction(x));
+            var b = new CsvTableDiffer.Side(ry.Files[k].FullPath, ry.Files[k].Display, ny[k], new UnitConversion(ctx.NewUnitsAsWritten, ctx.Old.Units), Direction(y));
+            list.Add(CsvTableDiffer.Compare(tables[k], a, b, point, ctx.Old.Units, ctx.UnitsConverted, ctx.TableOptions));
+        }
+        return list;
+    }
+
+    // The tables were read once already within the caller's limits; reading them again for the diff keeps only the line limit.
+    private static ReadOptions TableReading(ReadOptions? options) =>
+        new() { MaxLineLength = options?.MaxLineLength ?? new ReadOptions().MaxLineLength, MaxCsvBytes = long.MaxValue };
+
+    private static string RowsText(IReadOnlyList<DataChange> data, bool old)
+    {
+        static string Rows(long n) => n.ToString(CultureInfo.InvariantCulture) + (n == 1 ? " row" : " rows");
+        if (old)
+        {
+            return string.Join("; ", data.Select(d => Rows(d.OldRows)));
+        }
+        return string.Join("; ", data.Select(d => Rows(d.NewRows) + (d.Differing == 0 ? ", none differ"
+            : $": {d.Changed.ToString(CultureInfo.InvariantCulture)} changed, {d.Added.ToString(CultureInfo.InvariantCulture)} added, {d.Removed.ToString(CultureInfo.InvariantCulture)} removed")));
     }
 
     private static List<FieldChange> AllFields(SourceItem item, LoadDocument doc, Context ctx, bool removed) =>
@@ -277,8 +383,11 @@ public static class DocumentDiffer
 
         public bool UnitsConverted => converted;
 
-        public bool Same(double x, double y) =>
-            x == y || (converted && Math.Abs(x - y) <= ConvertedUlps * MachineEpsilon * Math.Max(Math.Abs(x), Math.Abs(y)));
+        public UnitSystem NewUnitsAsWritten { get; init; } = @new.Units;
+
+        public ReadOptions TableOptions { get; init; } = new();
+
+        public bool Same(double x, double y) => SameValue(x, y, converted);
 
         public bool Same(Vector3 x, Vector3 y) => Same(x.X, y.X) && Same(x.Y, y.Y) && Same(x.Z, y.Z);
 

@@ -28,6 +28,8 @@ public sealed class DocumentResultants : ILoadSink
         _current!.Add(_item);
     }
 
+    internal void FileOpened(string fullPath, string display) => _item?.Files.Add((fullPath, display));
+
     void ILoadSink.Header(DocumentHeader header) => ((ILoadSink)_cases).Header(header);
 
     void ILoadSink.BeginCase(string name, string? title)

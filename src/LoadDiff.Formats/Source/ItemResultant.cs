@@ -43,6 +43,9 @@ public sealed class ItemResultant
     /// </summary>
     public (ulong Sum, ulong Mix, long Count) RowDigest => (_digestSum, _digestMix, _count);
 
+    /// <summary>The CSV files the item's data came from, in the order the reader opened them (full path, display name).</summary>
+    internal List<(string FullPath, string Display)> Files { get; } = [];
+
     internal void Add(LoadItem item)
     {
         _count++;

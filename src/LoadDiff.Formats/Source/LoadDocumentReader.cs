@@ -43,6 +43,16 @@ public static class LoadDocumentReader
         options ??= new ReadOptions();
         var warnings = new List<Diagnostic>();
         var resultants = new DocumentResultants();
+        Action<string, string>? opened = options.ReferencedFileOpened;
+        // each item remembers the CSV files its data came from, so diff can compare their rows
+        options = options with
+        {
+            ReferencedFileOpened = (full, display) =>
+            {
+                opened?.Invoke(full, display);
+                resultants.FileOpened(full, display);
+            },
+        };
         JsonNode? root = null;
         int bom = 0;
         try
