@@ -99,8 +99,8 @@ public sealed class GitSource : IDisposable
         ArgumentNullException.ThrowIfNull(options);
         if (RepositoryPath.EndsWith(".csv", StringComparison.OrdinalIgnoreCase))
         {
-            // a CSV operand is read in place; its diagnostics carry the snapshot path, so say which operand it is
-            return LoadFileReader.Read(LocalPath, sink, Options(options));
+            // a CSV operand is read in place from the snapshot; its diagnostics name the operand, never the snapshot path
+            return LoadFileReader.ReadCsv(LocalPath, Operand, sink, Options(options));
         }
         byte[] bytes = File.ReadAllBytes(LocalPath);
         return LoadFileReader.ReadJson(bytes, Operand, Path.GetDirectoryName(LocalPath)!, sink, Options(options));

@@ -40,7 +40,7 @@ public static class LoadFileReader
             string dir = Path.GetDirectoryName(Path.GetFullPath(path))!;
             if (path.EndsWith(".csv", StringComparison.OrdinalIgnoreCase))
             {
-                return ReadCsv(path, sink, options, warnings);
+                return ReadCsv(path, path, sink, options, warnings);
             }
             if (new FileInfo(path).Length > options.StreamJsonAbove)
             {
@@ -67,6 +67,36 @@ public static class LoadFileReader
         try
         {
             return ReadJsonBytes(utf8, displayName, baseDirectory, sink, options, warnings);
+        }
+        catch (InputError e)
+        {
+            warnings.Add(e.Diagnostic);
+            return new ReadResult(null, warnings);
+        }
+    }
+
+    /// <summary>
+    /// Reads a CSV given directly (one case named after the stem of <paramref name="path"/>), every diagnostic naming
+    /// <paramref name="displayName"/>: the operand as the user wrote it, when <paramref name="path"/> is a copy taken from a revision.
+    /// </summary>
+    public static ReadResult ReadCsv(string path, string displayName, ILoadSink sink, ReadOptions? options = null)
+    {
+        ArgumentNullException.ThrowIfNull(path);
+        ArgumentNullException.ThrowIfNull(displayName);
+        ArgumentNullException.ThrowIfNull(sink);
+        options ??= new ReadOptions();
+        var warnings = new List<Diagnostic>();
+        try
+        {
+            if (Directory.Exists(path))
+            {
+                throw Fail(Codes.FileUnreadable, "is a directory, not a load file", displayName);
+            }
+            if (!File.Exists(path))
+            {
+                throw Fail(Codes.FileUnreadable, "file not found", displayName);
+            }
+            return ReadCsv(path, displayName, sink, options, warnings);
         }
         catch (InputError e)
         {
@@ -233,7 +263,8 @@ public static class LoadFileReader
         }
     }
 
-    private static ReadResult ReadCsv(string path, ILoadSink sink, ReadOptions options, List<Diagnostic> warnings)
+    // The case is named after the file on disk: a display name such as REV:x.csv is no file name.
+    private static ReadResult ReadCsv(string path, string display, ILoadSink sink, ReadOptions options, List<Diagnostic> warnings)
     {
         string name = Path.GetFileNameWithoutExtension(path);
         var units = new UnitConversion(options.CsvUnits, options.TargetUnits ?? options.CsvUnits);
@@ -251,12 +282,12 @@ public static class LoadFileReader
         long count = 0;
         if (sink is IReducedBlockSink bulk)
         {
-            new BlockCsvReducer(path, options, units, options.Threads).Reduce(path, bulk, null, "", "~mesh", null, n => count += n);
+            new BlockCsvReducer(display, options, units, options.Threads).Reduce(path, bulk, null, "", "~mesh", null, n => count += n);
         }
         else
         {
             var reader = new CsvLoadReader(units, options, sink.Item, () => ++count);
-            reader.ReadAny(CsvLoadReader.Open(path, path, options), "");
+            reader.ReadAny(CsvLoadReader.Open(path, display, options), "");
         }
         sink.EndCase();
         return new ReadResult(header, warnings);

@@ -23,7 +23,7 @@ public static class DistributeCommand
         var onto = new Option<string>("--onto")
         {
             Description = "CSV of the points to distribute onto: columns " + SupportPointReader.Layout
-                + " (coordinates in FILE's length units; weight is a relative stiffness, default 1).",
+                + " (coordinates in FILE's length units; weight is a relative stiffness, default 1). REV:PATH reads it from a git revision.",
             HelpName = "POINTS.csv",
             Required = true,
         };
@@ -56,7 +56,10 @@ public static class DistributeCommand
             {
                 throw new UsageException($"-o '{outPath}': the substitute is a load description; give a name ending in .loads.json");
             }
-            (IReadOnlyList<SupportPoint>? points, Diagnostic? bad) = SupportPointReader.Read(pointsPath);
+            // REV:PATH reads the points from that revision; a plain path (even beside a REV:PATH FILE) from the working tree
+            (IReadOnlyList<SupportPoint>? points, Diagnostic? bad) = GitSource.IsRevisionPath(pointsPath)
+                ? SupportPointReader.Read(GitSource.Open(pointsPath).LocalPath, pointsPath)
+                : SupportPointReader.Read(pointsPath);
             if (points is null)
             {
                 error.WriteLine(bad!.ToString());

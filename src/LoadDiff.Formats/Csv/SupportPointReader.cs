@@ -14,17 +14,25 @@ public static class SupportPointReader
     public const string Layout = "id, x, y, z and optionally weight";
 
     /// <summary>Reads the points; on failure the list is null and the diagnostic says why and where.</summary>
-    public static (IReadOnlyList<SupportPoint>? Points, Diagnostic? Error) Read(string path, ReadOptions? options = null)
+    public static (IReadOnlyList<SupportPoint>? Points, Diagnostic? Error) Read(string path, ReadOptions? options = null) =>
+        Read(path, path, options);
+
+    /// <summary>
+    /// Reads the points from <paramref name="path"/>, naming <paramref name="displayName"/> in every diagnostic (the operand
+    /// as the user wrote it, when the file is a copy taken from a revision); on failure the list is null.
+    /// </summary>
+    public static (IReadOnlyList<SupportPoint>? Points, Diagnostic? Error) Read(string path, string displayName, ReadOptions? options = null)
     {
         ArgumentNullException.ThrowIfNull(path);
+        ArgumentNullException.ThrowIfNull(displayName);
         options ??= new ReadOptions();
         try
         {
             if (!File.Exists(path))
             {
-                throw new InputError(new Diagnostic(Codes.FileUnreadable, Severity.Error, "file not found", new SourceLocation(path)));
+                throw new InputError(new Diagnostic(Codes.FileUnreadable, Severity.Error, "file not found", new SourceLocation(displayName)));
             }
-            using CsvRowReader csv = CsvLoadReader.Open(path, path, options);
+            using CsvRowReader csv = CsvLoadReader.Open(path, displayName, options);
             csv.ReadHeader();
             int id = csv.RequiredColumn("id", Layout), x = csv.RequiredColumn("x", Layout), y = csv.RequiredColumn("y", Layout), z = csv.RequiredColumn("z", Layout);
             int weight = csv.Column("weight");
