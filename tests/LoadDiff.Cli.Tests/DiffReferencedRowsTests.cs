@@ -30,11 +30,21 @@ public class DiffReferencedRowsTests
         string b = Version(dir, "new", "n1,1,0,0,0,0,-10\nn2,1,0,0,0,0,-10\n");
         CliRun text = CliProcess.Run("diff", a, b);
         Assert.True(text.ExitCode == 1, text.ToString());
-        Assert.Contains("rows differ, the resultant is unchanged", text.Stdout);
+        Assert.Contains("rows differ, the item's resultant is unchanged", text.Stdout);
         Assert.DoesNotContain("No differences", text.Stdout);
         CliRun json = CliProcess.Run("diff", a, b, "--format", "json");
         using JsonDocument doc = JsonDocument.Parse(json.Stdout);
         Assert.True(doc.RootElement.GetProperty("different").GetBoolean());
+        // each moved row with its own ΔM_i about the old centroid x = 1: n1 moved +1 m under −10 kN gives
+        // ΔM_y = −(Δx)·F_z = +10 kN·m, n2 moved −1 m gives −10 kN·m (M = r × F by hand); their sum is zero
+        JsonElement data = doc.RootElement.GetProperty("items")[0].GetProperty("data")[0];
+        Assert.Equal(2, data.GetProperty("changed").GetInt64());
+        JsonElement rows = data.GetProperty("rows");
+        Assert.Equal("n1", rows[0].GetProperty("key").GetString());
+        Assert.Equal(10, rows[0].GetProperty("delta_moment")[1].GetDouble(), 12);
+        Assert.Equal("n2", rows[1].GetProperty("key").GetString());
+        Assert.Equal(-10, rows[1].GetProperty("delta_moment")[1].GetDouble(), 12);
+        Assert.Equal(0, rows[1].GetProperty("delta_force")[2].GetDouble());
     }
 
     [Fact]

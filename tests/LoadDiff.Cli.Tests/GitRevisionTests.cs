@@ -79,6 +79,19 @@ public sealed class GitRevisionTests : IDisposable
         Assert.DoesNotContain("No differences", run.Stdout);
         using JsonDocument doc = JsonDocument.Parse(run.Stdout);
         Assert.True(doc.RootElement.GetProperty("different").GetBoolean());
+        // the changed row by id, with its own ΔR_i = −12 − (−10) = −2 kN and ΔM_i about the old centroid (1, 0, 0):
+        // (2 − 1, 0, 0) × (0, 0, −2) = (0, 2, 0) kN·m (r × F by hand); the working tree's −99 kN is never read
+        JsonElement data = doc.RootElement.GetProperty("items")[0].GetProperty("data")[0];
+        Assert.Equal(1, data.GetProperty("changed").GetInt64());
+        JsonElement row = data.GetProperty("rows")[0];
+        Assert.Equal("n2", row.GetProperty("key").GetString());
+        Assert.Equal(3, row.GetProperty("old_line").GetInt64());
+        Assert.Contains("-12", row.GetProperty("new").GetString(), StringComparison.Ordinal);
+        Assert.Equal(-2, row.GetProperty("delta_force")[2].GetDouble(), 12);
+        Assert.Equal(2, row.GetProperty("delta_moment")[1].GetDouble(), 12);
+        Assert.DoesNotContain("-99", run.Stdout, StringComparison.Ordinal);
+        JsonElement wind = doc.RootElement.GetProperty("resultants")[0];
+        Assert.Equal(-2, wind.GetProperty("delta_force")[2].GetDouble(), 12);
     }
 
     [Fact]

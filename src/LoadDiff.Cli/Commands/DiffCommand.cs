@@ -262,6 +262,8 @@ public static class DiffCommand
     // output must depend on the content alone (no directory part, so referenced files show as the document writes them).
     private const string TextConvName = "this-document";
 
+    private const string TextConvTableName = "this-table";
+
     // git: textconv gets one file (often a temporary copy of a blob, elsewhere than the repository) and diffs whatever
     // this prints, so the output depends only on the content: no path, and numbers that rounding cannot change.
     private static int TextConv(string file, TextWriter output, TextWriter error)
@@ -351,9 +353,8 @@ public static class DiffCommand
         catch (InputFailureException)
         {
             string why = captured.ToString().Trim();
-            int colon = why.IndexOf(": ", StringComparison.Ordinal);
-            // the diagnostic's position without the temporary file's name, which differs from run to run
-            output.WriteLine("// loaddiff: not readable as a load table: " + (colon >= 0 ? why[(colon + 2)..] : why));
+            // the diagnostic's line and column, under a fixed name instead of the temporary file's, which differs from run to run
+            output.WriteLine("// loaddiff: not readable as a load table: " + (why.StartsWith(file, StringComparison.Ordinal) ? TextConvTableName + why[file.Length..] : why));
         }
         return ExitCodes.Success;
     }

@@ -429,6 +429,12 @@ internal sealed class LoadJsonWalker
     private string DisplayPath(string rel)
     {
         string dir = System.IO.Path.GetDirectoryName(_file) ?? "";
+        int colon = _file.IndexOf(':', StringComparison.Ordinal);
+        if (dir.Length == 0 && colon > 0 && _options.PrepareReferencedFile is not null)
+        {
+            // a document at the top of a revision (REV:model.loads.json): its tables are REV:table.csv, not the working tree's
+            return _file[..(colon + 1)] + rel;
+        }
         return dir.Length == 0 ? rel : System.IO.Path.Combine(dir, rel);
     }
 
