@@ -13,7 +13,7 @@ namespace LoadDiff.Formats.Csv;
 /// id column, and triangles, by their position in the file), each value compared in the old version's units.
 /// Both files stream at once through a symmetric hash join: a row waits in memory only until its partner in the other
 /// file arrives, so two versions in the same order cost almost nothing, and reordered or unmatched rows cost one
-/// pending entry each (about 150 bytes for a point load: its id, line and nine values).
+/// pending entry each (about 250 bytes for a point load: its id, line and nine values, measured on 10⁶ reversed rows).
 /// </summary>
 internal static class CsvTableDiffer
 {
