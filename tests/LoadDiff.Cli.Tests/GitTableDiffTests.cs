@@ -99,3 +99,34 @@ public sealed class GitTableDiffTests : IDisposable
         Assert.Contains("R = [0, 0, 0.3]", CliProcess.RunIn(other.Path, "diff", "--textconv", good).Stdout);
     }
 }
+
+/// <summary>A document at the top of a revision names the tables it references as REV:table.csv in diagnostics.</summary>
+public sealed class GitTopLevelTableTests : IDisposable
+{
+    private readonly TempFolder _repo = new();
+
+    public GitTopLevelTableTests()
+    {
+        GitProcess.Ok(_repo.Path, "init", "-q", "-b", "main");
+        GitProcess.Ok(_repo.Path, "config", "user.name", "Test Engineer");
+        GitProcess.Ok(_repo.Path, "config", "user.email", "engineer@example.invalid");
+        _repo.Write("roof.loads.json", """{ "cases": { "wind": { "loads": [ { "id": "roof", "kind": "forces", "file": "nodes.csv" } ] } } }""");
+        _repo.Write("nodes.csv", "id,x,y,z,fx,fy,fz\nn1,0,0,0,0,0,-10\nn2,2,0,0,0,0,oops\n");
+        GitProcess.Ok(_repo.Path, "add", ".");
+        GitProcess.Ok(_repo.Path, "commit", "-q", "-m", "Roof");
+        _repo.Write("nodes.csv", "id,x,y,z,fx,fy,fz\nn1,0,0,0,0,0,-10\n");
+    }
+
+    public void Dispose() => _repo.Dispose();
+
+    [Fact]
+    public void A_bad_row_in_a_committed_table_is_named_by_revision_line_and_column()
+    {
+        CliRun run = CliProcess.RunIn(_repo.Path, "reduce", "HEAD:roof.loads.json");
+        Assert.Equal(2, run.ExitCode);
+        // 'oops' starts at column 14 of line 3 (counted by hand)
+        Assert.StartsWith("HEAD:nodes.csv:3:14: error", run.Stderr, StringComparison.Ordinal);
+        Assert.DoesNotContain("loaddiff-rev-", run.Stderr, StringComparison.Ordinal);
+        Assert.Equal(0, CliProcess.RunIn(_repo.Path, "reduce", "roof.loads.json").ExitCode);
+    }
+}
