@@ -100,7 +100,7 @@ public sealed class GitTextConvTests : IDisposable
         Assert.Equal(4, heavier.Length);
 
         // git's copies lie elsewhere: the CSV is named as the document writes it, no temporary path is printed
-        Assert.Contains("// referenced file \"exports/wind.csv\" is not beside this copy of the document", log);
+        Assert.Contains("// referenced file \"exports/wind.csv\" is not read by textconv", log);
         Assert.DoesNotContain(Path.GetTempPath(), log);
     }
 }

@@ -275,7 +275,10 @@ public static class DiffCommand
         }
         var absent = new HashSet<string>(StringComparer.Ordinal);
         var options = new ReadOptions { MissingReferencedFile = rel => absent.Add(rel) };
-        SourceReadResult r = LoadDocumentReader.ReadBytes(bytes, TextConvName, Path.GetDirectoryName(Path.GetFullPath(file))!, options);
+        // git runs textconv on the working-tree file itself and on temporary copies of blobs (beside which a file of the
+        // same name may lie): referenced tables are never read, so the same document always prints the same
+        string nowhere = Path.Combine(Path.GetTempPath(), "loaddiff-no-tables-" + Guid.NewGuid().ToString("N"));
+        SourceReadResult r = LoadDocumentReader.ReadBytes(bytes, TextConvName, nowhere, options);
         if (!r.Succeeded)
         {
             // not readable as a load description: show it as it is, with the reason
@@ -288,7 +291,7 @@ public static class DiffCommand
         string f = doc.Units.Force.Symbol, m = doc.Units.MomentSymbol;
         output.WriteLine($"// resultants about the origin ({f}, {m}; {TextConvDigits} significant digits, rounding noise printed as 0; loaddiff)");
 
-        // which cases hold data of a referenced file that is not beside this copy, in document order
+        // which cases hold data of a referenced table, in document order
         var needs = new Dictionary<string, List<string>>(StringComparer.Ordinal);
         var missing = new List<string>();
         foreach (SourceCase c in doc.Cases)
@@ -314,8 +317,8 @@ public static class DiffCommand
         }
         foreach (string rel in missing)
         {
-            output.WriteLine($"// referenced file {SourceText.Quoted(rel)} is not beside this copy of the document (git's textconv gets the document only): "
-                + "the resultants that need it are not shown");
+            output.WriteLine($"// referenced file {SourceText.Quoted(rel)} is not read by textconv (git gives it this document only; "
+                + "the table shows in its own diff with '*.csv diff=loaddiff'): the resultants that need it are not shown");
         }
         string Needs(IEnumerable<string> files) => "not shown: needs " + string.Join(", ", files.Distinct().Select(SourceText.Quoted));
         foreach (string name in r.Resultants!.Cases.CaseNames)
