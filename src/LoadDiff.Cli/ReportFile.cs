@@ -57,7 +57,7 @@ public static class ReportFile
             }
             else
             {
-                CheckMarkdownRenderer.Write(result, w);
+                CheckMarkdownRenderer.Write(result, w, Notes([original, substitute]));
             }
         });
     }
@@ -74,7 +74,7 @@ public static class ReportFile
             }
             else
             {
-                ReduceMarkdownRenderer.Write(result, w);
+                ReduceMarkdownRenderer.Write(result, w, Notes([file]));
             }
         });
     }
@@ -102,7 +102,48 @@ public static class ReportFile
                 inputs.Add(Fingerprint($"referenced by the {role}", display, full));
             }
         }
-        return new HtmlReportInfo(AppInfo.Version, Now(), inputs, sectionCharts ?? []);
+        return new HtmlReportInfo(AppInfo.Version, Now(), inputs, sectionCharts ?? []) { Notes = Notes([.. files.Select(f => f.File)]) };
+    }
+
+    // The notes (basis of each load) of the load documents among the inputs, read again from their bytes: the source
+    // model only, no referenced table is read (they are resolved against a folder that does not exist)
+    private static List<ReportNote> Notes(IReadOnlyList<LoadedFile> files)
+    {
+        var notes = new List<ReportNote>();
+        foreach (LoadedFile f in files.DistinctBy(f => f.Path))
+        {
+            if (f.Path == "-" || f.ContentPath.EndsWith(".csv", StringComparison.OrdinalIgnoreCase) || !File.Exists(f.ContentPath))
+            {
+                continue;
+            }
+            string nowhere = Path.Combine(Path.GetTempPath(), "loaddiff-no-tables-" + Guid.NewGuid().ToString("N"));
+            var read = LoadDiff.Formats.Source.LoadDocumentReader.ReadBytes(File.ReadAllBytes(f.ContentPath), f.Path, nowhere,
+                new LoadDiff.Formats.ReadOptions { MissingReferencedFile = _ => { } });
+            if (read.Document is not { } doc)
+            {
+                continue;
+            }
+            if (doc.Note is { } dn)
+            {
+                notes.Add(new ReportNote(f.Path, "document", dn));
+            }
+            foreach (var c in doc.Cases)
+            {
+                if (c.Note is { } cn)
+                {
+                    notes.Add(new ReportNote(f.Path, "case " + c.Name, cn));
+                }
+                for (int i = 0; i < c.Items.Length; i++)
+                {
+                    if (c.Items[i].Note is { } inote)
+                    {
+                        string id = c.Items[i].Id ?? $"#{(i + 1).ToString(CultureInfo.InvariantCulture)} (no id)";
+                        notes.Add(new ReportNote(f.Path, $"case {c.Name}, item {id}", inote));
+                    }
+                }
+            }
+        }
+        return notes;
     }
 
     private static ReportInput Fingerprint(string role, string name, string? path)

@@ -6,7 +6,10 @@ namespace LoadDiff.Reports;
 public static class CheckMarkdownRenderer
 {
     /// <summary>Writes the check result.</summary>
-    public static void Write(CheckResult result, TextWriter w)
+    /// <param name="result">What to write.</param>
+    /// <param name="w">Where to write it.</param>
+    /// <param name="notes">The notes written in the inputs (the basis of the loads), listed after the results; none when null.</param>
+    public static void Write(CheckResult result, TextWriter w, IReadOnlyList<Html.ReportNote>? notes = null)
     {
         ArgumentNullException.ThrowIfNull(result);
         ArgumentNullException.ThrowIfNull(w);
@@ -68,6 +71,7 @@ public static class CheckMarkdownRenderer
         w.WriteLine();
         w.WriteLine("**Result: " + Esc(CheckWords.Overall(result)) + "**");
         w.WriteLine();
+        NotesMarkdown.Write(notes, w);
         w.WriteLine("> " + Caution.Text);
     }
 

@@ -7,7 +7,10 @@ namespace LoadDiff.Reports;
 public static class ReduceMarkdownRenderer
 {
     /// <summary>Writes the reduction as a heading, a table and the caution.</summary>
-    public static void Write(ReduceResult result, TextWriter w)
+    /// <param name="result">What to write.</param>
+    /// <param name="w">Where to write it.</param>
+    /// <param name="notes">The notes written in the inputs (the basis of the loads), listed after the results; none when null.</param>
+    public static void Write(ReduceResult result, TextWriter w, IReadOnlyList<Html.ReportNote>? notes = null)
     {
         ArgumentNullException.ThrowIfNull(result);
         ArgumentNullException.ThrowIfNull(w);
@@ -35,6 +38,7 @@ public static class ReduceMarkdownRenderer
             w.WriteLine($"| {Escape(e.Name)} | {kind} | {NumberText.Readable(r.Force, fn)} | {NumberText.Readable(r.Moment, mn)} | {Describe.SystemCode(wr.Kind)} | {axis} | {pitch} |");
         }
         w.WriteLine();
+        NotesMarkdown.Write(notes, w);
         w.WriteLine("> " + Caution.Text);
     }
 

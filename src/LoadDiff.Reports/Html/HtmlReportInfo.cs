@@ -7,6 +7,12 @@ namespace LoadDiff.Reports.Html;
 /// <param name="Bytes">Size in bytes, when known.</param>
 public sealed record ReportInput(string Role, string Name, string? Sha256, long? Bytes);
 
+/// <summary>A note (the basis of a load: where it came from and why) written in an input, listed in the report.</summary>
+/// <param name="Input">The input file as the user named it.</param>
+/// <param name="Where">What the note is on: <c>document</c>, <c>case NAME</c> or <c>case NAME, item ID</c>.</param>
+/// <param name="Text">The note as written.</param>
+public sealed record ReportNote(string Input, string Where, string Text);
+
 /// <summary>A section-cut chart supplied by the section-cut command, drawn in the report as given.</summary>
 /// <param name="Title">Heading of the chart.</param>
 /// <param name="Svg">A complete, self-contained <c>&lt;svg&gt;</c> element (no external references).</param>
@@ -20,6 +26,9 @@ public sealed record SectionChart(string Title, string Svg, string? Caption = nu
 /// <param name="SectionCharts">Charts of the section cuts when they were asked for; empty otherwise.</param>
 public sealed record HtmlReportInfo(string ToolVersion, DateTimeOffset Created, IReadOnlyList<ReportInput> Inputs, IReadOnlyList<SectionChart> SectionCharts)
 {
+    /// <summary>The notes written in the inputs (document, cases, items), in file order.</summary>
+    public IReadOnlyList<ReportNote> Notes { get; init; } = [];
+
     /// <inheritdoc/>
     public override string ToString() => $"loaddiff {ToolVersion}, {Created:u}, {Inputs.Count} inputs";
 }

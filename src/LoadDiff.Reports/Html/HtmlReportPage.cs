@@ -12,6 +12,7 @@ internal static class HtmlReportPage
     public const string Css = """
         :root{--orig:#1f4e9a;--subs:#c2570c;--resid:#b00020}
         body{font:14px/1.45 system-ui,"Segoe UI","DejaVu Sans","Liberation Sans",Arial,sans-serif;color:#111;margin:20px auto;max-width:1280px;padding:0 16px}
+        .note-text{white-space:pre-wrap}
         h1{font-size:22px;margin:0 0 6px} h2{font-size:18px;margin:28px 0 6px;border-bottom:2px solid #333} h3{font-size:15px;margin:14px 0 4px}
         table{border-collapse:collapse;margin:6px 0 10px} th,td{border:1px solid #aaa;padding:3px 7px;text-align:left;vertical-align:top}
         th{background:#eee} td.num{text-align:right;font-variant-numeric:tabular-nums;white-space:nowrap}
@@ -114,6 +115,23 @@ internal static class HtmlReportPage
         }
         w.WriteLine("</tbody>");
         w.WriteLine("</table>");
+        w.WriteLine("<h3>Basis of the loads</h3>");
+        if (info.Notes.Count == 0)
+        {
+            w.WriteLine("<p class=\"note\">The inputs carry no notes (the optional <code>note</code> on the document, a case or an item says where a load came from and why).</p>");
+        }
+        else
+        {
+            w.WriteLine("<table id=\"input-notes\">");
+            w.WriteLine("<thead><tr><th>file</th><th>on</th><th>note</th></tr></thead>");
+            w.WriteLine("<tbody>");
+            foreach (ReportNote n in info.Notes)
+            {
+                w.WriteLine($"<tr><td><code>{HtmlText.Escape(n.Input)}</code></td><td>{HtmlText.Escape(n.Where)}</td><td class=\"note-text\">{HtmlText.Escape(n.Text)}</td></tr>");
+            }
+            w.WriteLine("</tbody>");
+            w.WriteLine("</table>");
+        }
         w.WriteLine($"<p>Made by loaddiff <span id=\"tool-version\">{HtmlText.Escape(info.ToolVersion)}</span> on "
             + $"<time id=\"created\" datetime=\"{info.Created.UtcDateTime.ToString("yyyy-MM-dd'T'HH:mm:ss'Z'", CultureInfo.InvariantCulture)}\">"
             + $"{info.Created.UtcDateTime.ToString("yyyy-MM-dd HH:mm:ss", CultureInfo.InvariantCulture)} UTC</time>.</p>");
