@@ -347,11 +347,12 @@ public static class DocumentDiffer
     private static string RowsText(IReadOnlyList<DataChange> data, bool old)
     {
         static string Rows(long n) => n.ToString(CultureInfo.InvariantCulture) + (n == 1 ? " row" : " rows");
+        string Table(DataChange d) => data.Count > 1 ? d.Table.Replace("mesh ", "", StringComparison.Ordinal) + " " : "";
         if (old)
         {
-            return string.Join("; ", data.Select(d => Rows(d.OldRows)));
+            return string.Join("; ", data.Select(d => Table(d) + Rows(d.OldRows)));
         }
-        return string.Join("; ", data.Select(d => Rows(d.NewRows) + (d.Differing == 0 ? ", none differ"
+        return string.Join("; ", data.Select(d => Table(d) + Rows(d.NewRows) + (d.Differing == 0 ? ", none differ"
             : $": {d.Changed.ToString(CultureInfo.InvariantCulture)} changed, {d.Added.ToString(CultureInfo.InvariantCulture)} added, {d.Removed.ToString(CultureInfo.InvariantCulture)} removed")));
     }
 
