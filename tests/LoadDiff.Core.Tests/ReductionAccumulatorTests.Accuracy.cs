@@ -166,4 +166,51 @@ public partial class ReductionAccumulatorTests
             Assert.True(error <= bound, $"M_O[{k}] error {error} above {bound} (exact {m[k]})");
         }
     }
+
+    [Fact]
+    public void ResultAt_pointForcesShiftedByAMillionMetres_sameToAFewUlp_whereNaiveDoublesAreNot()
+    {
+        // The companion of the property ResultAt_coordinatesOffsetByAMillionMetres_sameResult (bound 10⁻¹⁵ of the
+        // moment scale): here the naive textbook method — Σ r × F about the origin in plain doubles, then moved to the
+        // point with (O − P) × R — is computed on the same shifted data and shown to miss that bound. Positions are
+        // multiples of 2⁻¹⁶ within ±10 m, so the shift by (10⁶, −2·10⁶, 10⁶) is exact and the two systems are the same.
+        var random = new Random(20261203);
+        Vector3 shift = Vector3.Create(1e6, -2e6, 1e6);
+        double Dyadic(double v) => Math.Round(v * 65536) / 65536;
+        var at = new List<Vector3>();
+        var forces = new List<Vector3>();
+        for (int i = 0; i < 200; i++)
+        {
+            at.Add(Vector3.Create(Dyadic((random.NextDouble() - 0.5) * 20), Dyadic((random.NextDouble() - 0.5) * 20), Dyadic((random.NextDouble() - 0.5) * 20)));
+            forces.Add(Vector3.Create((random.NextDouble() - 0.5) * 200, (random.NextDouble() - 0.5) * 200, (random.NextDouble() - 0.5) * 200));
+        }
+        Vector3 p = Vector3.Create(Dyadic(1.25), Dyadic(-3.5), Dyadic(0.75));
+        var near = new ReductionAccumulator();
+        var far = new ReductionAccumulator();
+        for (int i = 0; i < at.Count; i++)
+        {
+            near.AddPointForce(at[i], forces[i]);
+            far.AddPointForce(at[i] + shift, forces[i]);
+        }
+        LoadReduction a = near.ResultAt(p);
+        LoadReduction b = far.ResultAt(p + shift);
+        double bound = 1e-15 * a.MomentScale(a.ReferencePoint);
+        Close.Absolute(a.Moment, b.Moment, bound);
+
+        double mx = 0, my = 0, mz = 0, rx = 0, ry = 0, rz = 0;
+        for (int i = 0; i < at.Count; i++)
+        {
+            Vector3 r = at[i] + shift, f = forces[i];
+            mx += (r.Y * f.Z) - (r.Z * f.Y);
+            my += (r.Z * f.X) - (r.X * f.Z);
+            mz += (r.X * f.Y) - (r.Y * f.X);
+            rx += f.X;
+            ry += f.Y;
+            rz += f.Z;
+        }
+        Vector3 q = p + shift;
+        Vector3 naive = Vector3.Create(mx - ((q.Y * rz) - (q.Z * ry)), my - ((q.Z * rx) - (q.X * rz)), mz - ((q.X * ry) - (q.Y * rx)));
+        double naiveError = (naive - a.Moment).Length;
+        Assert.True(naiveError > 100 * bound, $"naive error {naiveError:R} against the bound {bound:R}");
+    }
 }

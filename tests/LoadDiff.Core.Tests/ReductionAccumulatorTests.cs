@@ -90,8 +90,8 @@ public partial class ReductionAccumulatorTests
             Vector3 shift = V(1e6, -2e6, 1e6);
             LoadReduction a = Reduce.About(p, items);
             LoadReduction b = Reduce.About(p + shift, items.Select(i => Systems.Map(i, v => v, shift)));
-            AssertSame(a, b.Force, b.Moment, 1e-9);
-            Close.Relative(a.GrossForce, b.GrossForce, 1e-9);
+            AssertSame(a, b.Force, b.Moment, 1e-15);
+            Close.Relative(a.GrossForce, b.GrossForce, 1e-15);
         }, iter: Iterations);
     }
 

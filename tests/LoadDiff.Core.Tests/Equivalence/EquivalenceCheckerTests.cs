@@ -4,6 +4,7 @@ using LoadDiff.Core.Equivalence;
 using LoadDiff.Core.Loads;
 using LoadDiff.Core.Model;
 using LoadDiff.Core.Reduction;
+using LoadDiff.Core.Tests.Support;
 
 namespace LoadDiff.Core.Tests.Equivalence;
 
@@ -132,14 +133,20 @@ public partial class EquivalenceCheckerTests
     [InlineData(1.001, false)]
     public void Compare_force_residual_against_the_relative_tolerance_of_the_gross_force(double fraction, bool expected)
     {
-        // G_F = 60 + 40 = 100, rel = 1e-3 → allowed |ΔR| = 0.1. The residual acts at the resultant's own point,
-        // so only the force part is tested: the moment of 0.1 about the box corners stays below rel·G_M = 1e-3·100·D.
+        // G_F = 60 + 40 = 100, rel = 1e-3 → allowed |ΔR| = 0.1. The box is the segment x ∈ [0, 10], D = 10, so
+        // G_M = G_F·D = 1000 and the moment allowance is 1. The residual 0.1·fraction acts at x = 10; about the far corner
+        // x = 0 its moment is 10 × 0.1·fraction = fraction: both parts pass at 0.999 and both fail at 1.001.
         CaseComparison c = Check(ToleranceSpec.Default, V(0, 0, 0),
             [new PointForce("a", V(0, 0, 0), V(0, 0, -60)), new PointForce("b", V(10, 0, 0), V(0, 0, -40))],
             [new PointForce("a", V(0, 0, 0), V(0, 0, -60)), new PointForce("b", V(10, 0, 0), V(0, 0, -40 - (0.1 * fraction)))]);
         Assert.Equal(expected, c.ForcePasses);
         Assert.True(c.Tolerance!.ForceGovernedByRelative);
         Assert.Equal(0.1, c.Tolerance.Force, 15);
+        Assert.Equal(1, c.Tolerance.Moment, 14);
+        Close.Relative(fraction, c.Residual!.WorstMomentNorm, 1e-12);
+        Assert.Equal(0, c.Residual.WorstCorner.X);
+        Assert.Equal(expected, c.MomentPasses);
+        Assert.Equal(expected, c.Equivalent);
     }
 
     [Fact]
@@ -174,15 +181,38 @@ public partial class EquivalenceCheckerTests
     [Fact]
     public void Compare_coordinates_offset_by_a_million_metres_give_the_same_residual()
     {
-        // Exact arithmetic on the unshifted model: uniform 3 kN/m over 6 m ≡ 18 kN at mid-length.
-        Vector3 o = V(1e6, -2e6, 1e6);
+        // Exact arithmetic on the unshifted model: uniform 3 kN/m over 6 m is 18 kN with moment 54 kN·m about its start
+        // (the SPEC §2 trapezoid formula), and so are 10 kN at 1 m plus 8 kN at 5.5 m (10 + 8 = 18, 10 + 44 = 54).
+        // Offsets between 5·10⁵ and 10⁶ m with three decimals: o, o + 1, o + 3, o + 5.5 and o + 6 are exact doubles
+        // (same binade, multiples of its ulp), so each shifted pair is exactly equivalent: the exact residual is zero.
         LoadItem[] Original(Vector3 s) => [new LineLoad("w", s, s + V(6, 0, 0), V(0, 0, -3), V(0, 0, -3))];
-        LoadItem[] Substitute(Vector3 s) => [new PointForce("R", s + V(3, 0, 0), V(0, 0, -18))];
-        CaseComparison near = Check(Tight, V(3, 0, 0), Original(V(0, 0, 0)), Substitute(V(0, 0, 0)));
-        CaseComparison far = Check(Tight, o + V(3, 0, 0), Original(o), Substitute(o));
-        Assert.True(near.Equivalent);
-        Assert.True(far.Equivalent);
-        Assert.True(far.Residual!.WorstMomentNorm <= 1e-9 * far.Tolerance!.GrossMoment, far.Residual.WorstMomentNorm.ToString("R"));
+        LoadItem[] Substitute(Vector3 s) => [new PointForce("a", s + V(1, 0, 0), V(0, 0, -10)), new PointForce("b", s + V(5.5, 0, 0), V(0, 0, -8))];
+        Assert.True(Check(Tight, V(3, 0, 0), Original(V(0, 0, 0)), Substitute(V(0, 0, 0))).Equivalent);
+
+        var random = new Random(20261202);
+        double naiveWorst = 0;
+        for (int i = 0; i < 64; i++)
+        {
+            double x = Math.Round(5e5 + (random.NextDouble() * 5e5), 3);
+            Vector3 o = V(x, -2e6, 1e6);
+            Assert.True(x + 6 - x == 6 && x + 5.5 - x == 5.5, "offset not exact");
+            CaseComparison far = Check(Tight, o + V(3, 0, 0), Original(o), Substitute(o));
+            Assert.True(far.Equivalent);
+            // G_M = G_F·D = 18 × 6 = 108 kN·m; the code's residual stays within 4·10⁻¹⁶ of it, a few units in the last place.
+            Assert.Equal(108, far.Tolerance!.GrossMoment, 12);
+            double bound = 4e-16 * far.Tolerance.GrossMoment;
+            Assert.True(far.Residual!.WorstMomentNorm <= bound, $"offset {x}: {far.Residual.WorstMomentNorm:R}");
+            Assert.Equal(0, far.Residual.ForceNorm);
+
+            // The textbook method in plain doubles: M_y about the origin (r × F, |r| ≈ 10⁶ m), then moved to
+            // p = o + 3 by adding p_x·R_z; the substitute's minus the original's is the naive residual.
+            double p = x + 3;
+            double originalNaive = ((18 * x) + 54) - (18 * p);
+            double substituteNaive = ((10 * (x + 1)) + (8 * (x + 5.5))) - (18 * p);
+            naiveWorst = Math.Max(naiveWorst, Math.Abs(substituteNaive - originalNaive));
+        }
+        // Naive arithmetic misses the bound by orders of magnitude for some of these offsets: the test tells them apart.
+        Assert.True(naiveWorst > 1000 * 4e-16 * 108, naiveWorst.ToString("R"));
     }
 
     [Fact]

@@ -22,7 +22,7 @@ public static class Systems
     {
         0 => Gen.Select(Position, Load, (at, f) => (LoadItem)new PointForce("f", at, f)),
         1 => Load.Select(c => (LoadItem)new FreeCouple("c", c)),
-        2 => Gen.Select(Position, Vec(1, 3), Load, Load, (a, d, w1, w2) => (LoadItem)new LineLoad("w", a, a + d, w1, w2)),
+        2 => Gen.Select(Position, Vec(1, 3), Load, Load, (a, d, w1, w2) => (LoadItem)new LineLoad("w", a, a + Vector3.Create(Dyadic(d.X), Dyadic(d.Y), Dyadic(d.Z)), w1, w2)),
         3 => Gen.Select(Position, Gen.Double[-50, 50], Vec(-5, 5), Gen.Bool, (o, p, g, normal) =>
             (LoadItem)new AreaLoad("a", [o, o + Vector3.Create(2, 0, 0.5), o + Vector3.Create(2.5, 3, 1), o + Vector3.Create(-0.5, 2, 0.5)],
                 p, normal ? null : Vector3.Create(0.3, -0.2, 1), g, o + Vector3.Create(1, 1, 0))),
