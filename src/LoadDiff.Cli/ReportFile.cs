@@ -106,7 +106,7 @@ public static class ReportFile
     }
 
     // The notes (basis of each load) of the load documents among the inputs, read again from their bytes: the source
-    // model only, no referenced table is read (they are resolved against a folder that does not exist)
+    // model only, no referenced table is read
     private static List<ReportNote> Notes(IReadOnlyList<LoadedFile> files)
     {
         var notes = new List<ReportNote>();
@@ -116,9 +116,7 @@ public static class ReportFile
             {
                 continue;
             }
-            string nowhere = Path.Combine(Path.GetTempPath(), "loaddiff-no-tables-" + Guid.NewGuid().ToString("N"));
-            var read = LoadDiff.Formats.Source.LoadDocumentReader.ReadBytes(File.ReadAllBytes(f.ContentPath), f.Path, nowhere,
-                new LoadDiff.Formats.ReadOptions { MissingReferencedFile = _ => { } });
+            var read = LoadDiff.Formats.Source.LoadDocumentReader.ReadDocumentOnly(File.ReadAllBytes(f.ContentPath), f.Path);
             if (read.Document is not { } doc)
             {
                 continue;

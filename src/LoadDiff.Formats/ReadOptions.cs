@@ -77,4 +77,12 @@ public sealed record ReadOptions
     /// outside the folder or an empty one is still an error. Null (the default): a missing file is an error (LD051).
     /// </summary>
     public Action<string>? MissingReferencedFile { get; init; }
+
+    /// <summary>
+    /// When true, no referenced file is opened or looked for: every mesh or forces item that references one is kept
+    /// without its data, as if the file were absent, and <see cref="MissingReferencedFile"/> (when set) is told each name.
+    /// For a caller that has the document only (git's external diff and textconv, a report re-reading its notes), where
+    /// a file beside the document's copy would be some other version's, or a stray one.
+    /// </summary>
+    public bool ReferencedFilesSkipped { get; init; }
 }

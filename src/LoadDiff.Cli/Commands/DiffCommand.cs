@@ -146,9 +146,10 @@ public static class DiffCommand
 
     private static SourceReadResult Read(Source s, UnitSystem? target, TextWriter error)
     {
-        var plain = new ReadOptions { TargetUnits = target, MissingReferencedFile = s.WithoutTables ? _ => { } : null };
+        var plain = new ReadOptions { TargetUnits = target };
         ReadOptions options = s.Revision?.Options(plain) ?? plain;
-        SourceReadResult r = s.Bytes is null ? LoadDocumentReader.Read(s.Name, options) : LoadDocumentReader.ReadBytes(s.Bytes, s.Name, s.BaseDirectory, options);
+        SourceReadResult r = s.WithoutTables ? LoadDocumentReader.ReadDocumentOnly(s.Bytes!, s.Name, options)
+            : s.Bytes is null ? LoadDocumentReader.Read(s.Name, options) : LoadDocumentReader.ReadBytes(s.Bytes, s.Name, s.BaseDirectory, options);
         FmtCommand.Report(r, error);
         return r;
     }
@@ -211,7 +212,6 @@ public static class DiffCommand
         string path = args[0], oldFile = args[1], newFile = args[4];
         // git hands over the two versions of this one file only: a document's referenced CSV tables are not read (neither
         // version's can be known; the working tree's would be wrong for the old side), each table shows in its own diff
-        string baseDir = Path.Combine(Path.GetTempPath(), "loaddiff-no-tables-" + Guid.NewGuid().ToString("N"));
         string oldName = "a/" + path, newName = "b/" + path;
         output.WriteLine($"loaddiff diff {oldName} {newName}");
         if (oldFile == "/dev/null" || newFile == "/dev/null")
@@ -225,8 +225,8 @@ public static class DiffCommand
             }
             return ExitCodes.Success;
         }
-        var a = new Source(oldName, File.ReadAllBytes(oldFile), baseDir) { WithoutTables = true };
-        var b = new Source(newName, File.ReadAllBytes(newFile), baseDir) { WithoutTables = true };
+        var a = new Source(oldName, File.ReadAllBytes(oldFile), "") { WithoutTables = true };
+        var b = new Source(newName, File.ReadAllBytes(newFile), "") { WithoutTables = true };
         var captured = new StringWriter();
         try
         {
@@ -277,8 +277,7 @@ public static class DiffCommand
         var options = new ReadOptions { MissingReferencedFile = rel => absent.Add(rel) };
         // git runs textconv on the working-tree file itself and on temporary copies of blobs (beside which a file of the
         // same name may lie): referenced tables are never read, so the same document always prints the same
-        string nowhere = Path.Combine(Path.GetTempPath(), "loaddiff-no-tables-" + Guid.NewGuid().ToString("N"));
-        SourceReadResult r = LoadDocumentReader.ReadBytes(bytes, TextConvName, nowhere, options);
+        SourceReadResult r = LoadDocumentReader.ReadDocumentOnly(bytes, TextConvName, options);
         if (!r.Succeeded)
         {
             // not readable as a load description: show it as it is, with the reason

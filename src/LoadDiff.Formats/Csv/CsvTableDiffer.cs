@@ -17,6 +17,13 @@ namespace LoadDiff.Formats.Csv;
 /// </summary>
 internal static class CsvTableDiffer
 {
+    /// <summary>
+    /// Options for reading tables again to compare their rows: the caller's line limit, no size limit (the first read,
+    /// which reduced the same files, enforced it).
+    /// </summary>
+    internal static ReadOptions Rereading(ReadOptions? options) =>
+        new() { MaxLineLength = options?.MaxLineLength ?? new ReadOptions().MaxLineLength, MaxCsvBytes = long.MaxValue };
+
     /// <summary>Differing rows kept in detail per table; the counts cover all of them.</summary>
     public const int ShownRows = 20;
 

@@ -374,7 +374,7 @@ internal sealed class LoadJsonWalker
     // simply absent is left out; a name outside the folder or an empty one is still an error.
     private bool LeftOut(JsonNode item, string path, params string[] keys)
     {
-        if (_options.MissingReferencedFile is null)
+        if (_options.MissingReferencedFile is null && !_options.ReferencedFilesSkipped)
         {
             return false;
         }
@@ -384,7 +384,7 @@ internal sealed class LoadJsonWalker
             if (item[key] is { } node)
             {
                 (string full, string rel) = Locate(node, path + "." + key);
-                if (!File.Exists(full))
+                if (_options.ReferencedFilesSkipped || !File.Exists(full))
                 {
                     missing.Add(rel);
                 }
@@ -392,7 +392,7 @@ internal sealed class LoadJsonWalker
         }
         foreach (string rel in missing)
         {
-            _options.MissingReferencedFile(rel);
+            _options.MissingReferencedFile?.Invoke(rel);
         }
         return missing.Count > 0;
     }

@@ -49,7 +49,7 @@ public static class DocumentDiffer
         var ctx = new Context(a, b, converted)
         {
             NewUnitsAsWritten = bAsWritten.Units,
-            TableOptions = TableReading(options),
+            TableOptions = CsvTableDiffer.Rereading(options),
         };
         bool Wanted(string name) => selected.Count == 0 || selected.Contains(name);
         Dictionary<string, List<string>> needs = referencedDataRead ? [] : TablesNeeded(a, b);
@@ -341,9 +341,6 @@ public static class DocumentDiffer
     }
 
     // The tables were read once already within the caller's limits; reading them again for the diff keeps only the line limit.
-    private static ReadOptions TableReading(ReadOptions? options) =>
-        new() { MaxLineLength = options?.MaxLineLength ?? new ReadOptions().MaxLineLength, MaxCsvBytes = long.MaxValue };
-
     private static string RowsText(IReadOnlyList<DataChange> data, bool old)
     {
         static string Rows(long n) => n.ToString(CultureInfo.InvariantCulture) + (n == 1 ? " row" : " rows");

@@ -36,6 +36,16 @@ public static class LoadDocumentReader
         return ReadBytes(bytes, path, dir, options);
     }
 
+    /// <summary>
+    /// Reads a document held in memory without any file it references (<see cref="ReadOptions.ReferencedFilesSkipped"/>):
+    /// items whose data are in a CSV table are kept without them. Names that leave the document's folder are still errors.
+    /// </summary>
+    public static SourceReadResult ReadDocumentOnly(byte[] utf8, string displayName, ReadOptions? options = null) =>
+        ReadBytes(utf8, displayName, DocumentOnlyFolder, (options ?? new ReadOptions()) with { ReferencedFilesSkipped = true });
+
+    // Only the containment check of referenced names uses the folder when nothing is opened: any absolute path will do.
+    private static readonly string DocumentOnlyFolder = Path.Combine(Path.GetTempPath(), "loaddiff-document-only");
+
     /// <summary>Reads JSON held in memory; referenced files resolve against <paramref name="baseDirectory"/>.</summary>
     public static SourceReadResult ReadBytes(byte[] utf8, string displayName, string baseDirectory, ReadOptions? options = null)
     {

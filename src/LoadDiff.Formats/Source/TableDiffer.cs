@@ -32,7 +32,7 @@ public static class TableDiffer
         ArgumentNullException.ThrowIfNull(oldLoads);
         ArgumentNullException.ThrowIfNull(newLoads);
         ArgumentNullException.ThrowIfNull(units);
-        var reading = new ReadOptions { MaxLineLength = options?.MaxLineLength ?? new ReadOptions().MaxLineLength, MaxCsvBytes = long.MaxValue };
+        ReadOptions reading = CsvTableDiffer.Rereading(options);
         string caseName = System.IO.Path.GetFileNameWithoutExtension(oldName[(oldName.LastIndexOf(':') + 1)..]);
         string? la = CsvTableDiffer.LayoutOf(oldPath, oldName, reading), lb = CsvTableDiffer.LayoutOf(newPath, newName, reading);
         LoadReduction ra = oldLoads.ResultAt(point), rb = newLoads.ResultAt(point);
