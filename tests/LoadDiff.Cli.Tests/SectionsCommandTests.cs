@@ -56,6 +56,39 @@ public class SectionsCommandTests
         Assert.Equal("dead", root.GetProperty("cases")[0].GetProperty("name").GetString());
     }
 
+    // Cantilever, free end at x = 0, support at x = 4 m: 12.5 kN/m dead, 20 kN live at the tip, combination 1.35·G + 1.5·Q
+    // (EN 1990 (6.10), Table A1.2(B)).
+    private const string Cantilever = """
+        { "units": { "force": "kN", "length": "m" }, "cases": {
+          "dead": { "loads": [ { "id": "udl", "kind": "line", "from": [0, 0, 0], "to": [4, 0, 0], "start": [0, 0, -12.5], "end": [0, 0, -12.5] } ] },
+          "live": { "loads": [ { "id": "tip", "kind": "force", "at": [0, 0, 0], "value": [0, 0, -20] } ] } },
+          "combinations": { "uls": { "dead": 1.35, "live": 1.5 } } }
+        """;
+
+    [Fact]
+    public void Json_cantilever_combination_matches_the_closed_form_at_every_station()
+    {
+        using var dir = new TempFolder();
+        string a = dir.Write("cantilever.loads.json", Cantilever);
+        CliRun run = CliProcess.Run("sections", a, a, "--axis", "x", "--from", "0", "--to", "4", "--stations", "5", "--case", "uls", "--format", "json");
+        Assert.True(run.ExitCode == 0, run.ToString());
+        using JsonDocument doc = JsonDocument.Parse(run.Stdout);
+        JsonElement[] stations = [.. doc.RootElement.GetProperty("stations").EnumerateArray()];
+        Assert.Equal([0.0, 1, 2, 3, 4], stations.Select(s => s.GetProperty("s").GetDouble()));
+        foreach (JsonElement st in stations)
+        {
+            // Standard closed form (statics of a cantilever): loads towards −z, cut side x' ≤ x, moment about the cut point:
+            // V_z = −(1.35·w·x + 1.5·P), M_y = −(1.35·w·x²/2 + 1.5·P·x); at x = 4: −97.5 kN and −255 kN·m.
+            double x = st.GetProperty("s").GetDouble();
+            JsonElement o = st.GetProperty("original");
+            Assert.Equal(-((1.35 * 12.5 * x) + (1.5 * 20)), o.GetProperty("force")[2].GetDouble(), 9);
+            Assert.Equal(-((1.35 * 12.5 * x * x / 2) + (1.5 * 20 * x)), o.GetProperty("moment")[1].GetDouble(), 9);
+            Assert.Equal(0, o.GetProperty("force")[0].GetDouble(), 9);
+            Assert.Equal(0, o.GetProperty("moment")[2].GetDouble(), 9);
+        }
+        Assert.Equal(-255, stations[^1].GetProperty("original").GetProperty("moment")[1].GetDouble(), 9);
+    }
+
     [Fact]
     public void Svg_chart_is_well_formed_and_labelled_with_units()
     {

@@ -21,23 +21,6 @@ public partial class SectionProfileTests
         : item;
 
     [Fact]
-    public void Compute_stationBeyondAllLoads_equalsTheFullResultantMovedToTheCutPoint()
-    {
-        // Reference: the independent whole-system reduction (exact closed forms, tested against handbook values).
-        // Free couples have no position and are left out of every cut, so they are left out of the reference too.
-        Gen.Select(PlanarSystem, AnyAxis).Sample((items, axis) =>
-        {
-            LoadItem[] located = [.. items.Where(i => i is not FreeCouple)];
-            double beyond = (SectionProfile.Extent(axis, items)?.Max ?? 0) + 1.5;
-            ForceCoupleSystem cut = Profile(axis, [beyond], items)[0];
-            LoadReduction whole = Reduce.About(axis.PointAt(beyond), located);
-            double scale = whole.GrossForce + 1e-300;
-            Close.Absolute(whole.Force, cut.Force, 1e-12 * scale);
-            Close.Absolute(whole.Moment, cut.Moment, 1e-11 * whole.MomentScale(whole.ReferencePoint) + 1e-300);
-        }, iter: 400);
-    }
-
-    [Fact]
     public void Compute_itemsSplitIntoPieces_sameProfileAtEveryStation()
     {
         Gen.Select(PlanarSystem, AnyAxis, Gen.Double[0.1, 0.9], Gen.Double[-4, 4].Array[1, 12]).Sample((items, axis, t, raw) =>
@@ -53,23 +36,6 @@ public partial class SectionProfileTests
                 Close.Absolute(a[i].Moment, b[i].Moment, 1e-11 * ms);
             }
         }, iter: 300);
-    }
-
-    [Fact]
-    public void Compute_combination_isTheFactoredSumOfTheCaseProfiles()
-    {
-        Gen.Select(PlanarSystem, PlanarSystem, AnyAxis).Sample((dead, live, axis) =>
-        {
-            double[] stations = [-2, 0, 0.5, 3];
-            IReadOnlyList<ForceCoupleSystem> c = SectionProfile.Compute(axis, stations, [new(dead, 1.35), new(live, 1.5)], out _);
-            IReadOnlyList<ForceCoupleSystem> d = Profile(axis, stations, dead), l = Profile(axis, stations, live);
-            double scale = Reduce.About(axis.Origin, [.. dead, .. live]).GrossForce * 20 + 1e-300;
-            for (int i = 0; i < stations.Length; i++)
-            {
-                Close.Absolute((d[i].Force * 1.35) + (l[i].Force * 1.5), c[i].Force, 1e-12 * scale);
-                Close.Absolute((d[i].Moment * 1.35) + (l[i].Moment * 1.5), c[i].Moment, 1e-12 * scale);
-            }
-        }, iter: 100);
     }
 
     // Splits an item into pieces that together are the same load: a line at parameter t, a polygon into a fan of
