@@ -24,7 +24,10 @@ public static class UnitCatalog
     /// <summary>Kilogram-force, 9.80665 N.</summary>
     public static readonly Unit KilogramForce = new("kgf", 9.80665);
 
-    /// <summary>Tonne-force, 9806.65 N.</summary>
+    /// <summary>
+    /// Metric ton-force (tonne-force), 1000 kgf = 9806.65 N exactly. Not the "ton-force" of NIST SP 811 (2008), B.8,
+    /// which is 2000 lbf = 8896.443230521 N.
+    /// </summary>
     public static readonly Unit TonneForce = new("tf", 9806.65);
 
     /// <summary>Metre.</summary>
