@@ -22,6 +22,148 @@ public class DistributeCommandTests
         Assert.Equal(5, doc.RootElement.GetProperty("cases").GetArrayLength());
     }
 
+    // Closed form of the weighted minimum norm for the skid's four supports, derived by hand from support-points.csv:
+    // S1, S2 at (0.5, ∓0.8, 0) with w = 1, S3, S4 at (3.5, ∓0.8, 0) with w = 1.5. The plain centroid is c = (2, 0, 0), so
+    // d_i = (∓1.5, ∓0.8, 0) and ℓ² = 1.5² + 0.8² = 2.89. The optimum is F_i = w_i (λ + μ × d_i), C_i = w_i ℓ² μ (Lagrange
+    // condition of min Σ|F_i|²/w_i + Σ|C_i|²/(w_i ℓ²) subject to equilibrium about c). With Σw = 5, Σw d_x = 1.5, Σw d_y = 0,
+    // Σw d_x² = 11.25, Σw d_y² = 3.2, Σw d_x d_y = 0 and K = Σw ℓ² = 14.45 with couples (0 without), the six equations split:
+    //   5 λ_x = R_x;   (3.2 + K) μ_x = M_x;
+    //   5 λ_y + 1.5 μ_z = R_y,   1.5 λ_y + (14.45 + K) μ_z = M_z;
+    //   5 λ_z − 1.5 μ_y = R_z,  −1.5 λ_z + (11.25 + K) μ_y = M_y.
+    // R and M_c come from the fixture's loads, summed here in decimal.
+    private static readonly (string Id, decimal X, decimal Y, decimal W)[] SkidSupports =
+        [("S1", 0.5m, -0.8m, 1m), ("S2", 0.5m, 0.8m, 1m), ("S3", 3.5m, -0.8m, 1.5m), ("S4", 3.5m, 0.8m, 1.5m)];
+
+    private static decimal[] Dec(JsonElement array) => [.. array.EnumerateArray().Select(e => e.GetDecimal())];
+
+    // R and the moment about c = (2, 0, 0) of each case of the skid file, in decimal (the loads are written in kN and m).
+    private static Dictionary<string, (decimal[] R, decimal[] M)> SkidCaseResultants()
+    {
+        using JsonDocument doc = JsonDocument.Parse(File.ReadAllText(Skid));
+        var result = new Dictionary<string, (decimal[], decimal[])>();
+        foreach (JsonProperty c in doc.RootElement.GetProperty("cases").EnumerateObject())
+        {
+            decimal[] r = new decimal[3], m = new decimal[3];
+            foreach (JsonElement item in c.Value.GetProperty("loads").EnumerateArray())
+            {
+                decimal[] v = Dec(item.GetProperty("value"));
+                if (item.GetProperty("kind").GetString() == "couple")
+                {
+                    m = [m[0] + v[0], m[1] + v[1], m[2] + v[2]];
+                    continue;
+                }
+                Assert.Equal("force", item.GetProperty("kind").GetString());
+                decimal[] at = Dec(item.GetProperty("at"));
+                decimal dx = at[0] - 2, dy = at[1], dz = at[2];
+                r = [r[0] + v[0], r[1] + v[1], r[2] + v[2]];
+                m = [m[0] + (dy * v[2]) - (dz * v[1]), m[1] + (dz * v[0]) - (dx * v[2]), m[2] + (dx * v[1]) - (dy * v[0])];
+            }
+            result[c.Name] = (r, m);
+        }
+        return result;
+    }
+
+    private static (decimal[] F, decimal[] C)[] SkidClosedForm(decimal[] r, decimal[] m, bool couples)
+    {
+        decimal k = couples ? 14.45m : 0m;
+        decimal lx = r[0] / 5, mx = m[0] / (3.2m + k);
+        decimal dz = (5 * (11.25m + k)) - 2.25m, lz = ((r[2] * (11.25m + k)) + (1.5m * m[1])) / dz, my = ((5 * m[1]) + (1.5m * r[2])) / dz;
+        decimal dy = (5 * (14.45m + k)) - 2.25m, ly = ((r[1] * (14.45m + k)) - (1.5m * m[2])) / dy, mz = ((5 * m[2]) - (1.5m * r[1])) / dy;
+        return [.. SkidSupports.Select(s =>
+        {
+            decimal x = s.X - 2, y = s.Y;
+            decimal[] f = [s.W * (lx - (mz * y)), s.W * (ly + (mz * x)), s.W * (lz + (mx * y) - (my * x))];
+            decimal[] c = couples ? [s.W * 2.89m * mx, s.W * 2.89m * my, s.W * 2.89m * mz] : [0m, 0m, 0m];
+            return (f, c);
+        })];
+    }
+
+    [Theory]
+    [InlineData(false)]
+    [InlineData(true)]
+    public void Skid_support_forces_match_the_closed_form_and_carry_each_case_resultant(bool couples)
+    {
+        // The layout the closed form above assumes.
+        Assert.Equal("id,x,y,z,weight\nS1,0.5,-0.8,0,1\nS2,0.5,0.8,0,1\nS3,3.5,-0.8,0,1.5\nS4,3.5,0.8,0,1.5\n",
+            File.ReadAllText(Supports).ReplaceLineEndings("\n"));
+        string[] args = couples ? ["distribute", Skid, "--onto", Supports, "--couples"] : ["distribute", Skid, "--onto", Supports];
+        CliRun run = CliProcess.Run(args);
+        Assert.True(run.ExitCode == 0, run.ToString());
+        using JsonDocument output = JsonDocument.Parse(run.Stdout);
+        var resultants = SkidCaseResultants();
+        Assert.Equal(["weight", "operating", "seismic-y"], output.RootElement.GetProperty("cases").EnumerateObject().Select(c => c.Name));
+        foreach (JsonProperty c in output.RootElement.GetProperty("cases").EnumerateObject())
+        {
+            (decimal[] r, decimal[] m) = resultants[c.Name];
+            var expected = SkidClosedForm(r, m, couples);
+            JsonElement[] loads = [.. c.Value.GetProperty("loads").EnumerateArray()];
+            decimal scale = expected.Max(e => e.F.Concat(e.C).Max(Math.Abs));
+            decimal allowed = 1e-12m * scale;
+            decimal[] sumF = new decimal[3], sumM = new decimal[3];
+            for (int i = 0; i < 4; i++)
+            {
+                JsonElement force = loads[i];
+                Assert.Equal(SkidSupports[i].Id, force.GetProperty("id").GetString());
+                Assert.Equal("force", force.GetProperty("kind").GetString());
+                decimal[] f = Dec(force.GetProperty("value"));
+                for (int k = 0; k < 3; k++)
+                {
+                    Assert.True(Math.Abs(f[k] - expected[i].F[k]) <= allowed, $"{c.Name} {SkidSupports[i].Id} F[{k}] = {f[k]}, expected {expected[i].F[k]}");
+                }
+                decimal dx = SkidSupports[i].X - 2, dy = SkidSupports[i].Y;
+                sumF = [sumF[0] + f[0], sumF[1] + f[1], sumF[2] + f[2]];
+                sumM = [sumM[0] + (dy * f[2]), sumM[1] - (dx * f[2]), sumM[2] + (dx * f[1]) - (dy * f[0])];
+            }
+            // Couples follow the forces, only the non-zero ones, named after their point.
+            foreach (JsonElement couple in loads.Skip(4))
+            {
+                Assert.True(couples, "a couple without --couples");
+                Assert.Equal("couple", couple.GetProperty("kind").GetString());
+                int i = Array.FindIndex(SkidSupports, s => s.Id + "-couple" == couple.GetProperty("id").GetString());
+                decimal[] v = Dec(couple.GetProperty("value"));
+                for (int k = 0; k < 3; k++)
+                {
+                    Assert.True(Math.Abs(v[k] - expected[i].C[k]) <= allowed, $"{c.Name} couple {i} [{k}] = {v[k]}, expected {expected[i].C[k]}");
+                }
+                sumM = [sumM[0] + v[0], sumM[1] + v[1], sumM[2] + v[2]];
+            }
+            Assert.Equal(couples ? 8 : 4, loads.Length);
+            // The case's resultant, summed here from the written numbers (decimal), against the fixture's.
+            for (int k = 0; k < 3; k++)
+            {
+                Assert.True(Math.Abs(sumF[k] - r[k]) <= allowed, $"{c.Name} ΣF[{k}] = {sumF[k]}, fixture {r[k]}");
+                Assert.True(Math.Abs(sumM[k] - m[k]) <= allowed * 4, $"{c.Name} ΣM[{k}] = {sumM[k]}, fixture {m[k]}");
+            }
+        }
+        // Combinations are carried over as factors of the distributed cases.
+        Assert.Equal("{ \"weight\": 1, \"operating\": 1 }".Replace(" ", ""),
+            output.RootElement.GetProperty("combinations").GetProperty("operating-total").GetRawText().Replace(" ", ""));
+    }
+
+    [Fact]
+    public void Skid_weight_case_without_couples_has_the_hand_values()
+    {
+        // By hand from the fixture (kN, m): R_z = −(6.9 + 7.3 + 11.8 + 12.4 + 5.1 + 5.5) = −49; about c = (2, 0, 0)
+        // M_x = Σ y F_z = 0.7 (−0.4 − 0.6 − 0.4) = −0.98, M_y = −Σ (x − 2) F_z = −(1.8·14.2 − 1.8·10.6) = −6.48.
+        // With the closed form above: μ_x = −0.98/3.2 = −0.30625; 5λ_z − 1.5μ_y = −49, −1.5λ_z + 11.25μ_y = −6.48 give
+        // λ_z = −560.97/54, μ_y = −105.9/54; F_z = w (λ_z + μ_x y − μ_y (x − 2)):
+        // S1 −13.085, S2 −13.575, S3 −10.8025, S4 −11.5375 (sum −49). Equal weights would give S1 −12.25 + 0.30625 − 1.08 = −13.02375 instead (μ_x = −0.98/2.56, μ_y = −6.48/9).
+        CliRun run = CliProcess.Run("distribute", Skid, "--onto", Supports, "--case", "weight");
+        Assert.True(run.ExitCode == 0, run.ToString());
+        using JsonDocument output = JsonDocument.Parse(run.Stdout);
+        JsonElement[] loads = [.. output.RootElement.GetProperty("cases").GetProperty("weight").GetProperty("loads").EnumerateArray()];
+        double[][] expected = [[0, 0, -13.085], [0, 0, -13.575], [0, 0, -10.8025], [0, 0, -11.5375]];
+        Assert.Equal(4, loads.Length);
+        for (int i = 0; i < 4; i++)
+        {
+            double[] v = [.. loads[i].GetProperty("value").EnumerateArray().Select(e => e.GetDouble())];
+            for (int k = 0; k < 3; k++)
+            {
+                Assert.True(Math.Abs(v[k] - expected[i][k]) <= 1e-12 * 49, $"S{i + 1}[{k}] = {v[k]:R}, expected {expected[i][k]}");
+            }
+        }
+    }
+
     [Fact]
     public void The_written_substitute_is_canonical_and_reads_back_the_forces_printed_to_standard_output()
     {
