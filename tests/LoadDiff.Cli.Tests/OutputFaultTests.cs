@@ -16,7 +16,7 @@ public class OutputFaultTests
         Assert.True(p.ExitCode == 0, $"chattr {flag} {path} failed: {p.StandardError.ReadToEnd()} (the test needs an ext4-like file system and root)");
     }
 
-    [Fact]
+    [ImmutableFolderFact]
     public void A_report_into_a_folder_that_refuses_writes_exits_2_and_keeps_the_old_report()
     {
         using var t = new TempFolder();
@@ -60,5 +60,69 @@ public class OutputFaultTests
         Assert.Equal(2, run.ExitCode);
         Assert.Contains("does not exist", run.Stderr);
         Assert.False(Directory.Exists(Path.Combine(t.Path, "no")));
+    }
+}
+
+/// <summary>
+/// A test that needs a folder that refuses writes even to root (<c>chattr +i</c>): probed once by making a folder
+/// immutable and trying to create a file in it; skipped with the reason where that does not hold (no chattr, not
+/// root, or a file system without the attribute such as tmpfs or overlay).
+/// </summary>
+public sealed class ImmutableFolderFactAttribute : FactAttribute
+{
+    private static readonly Lazy<string?> Missing = new(Probe);
+
+    public ImmutableFolderFactAttribute()
+    {
+        if (Missing.Value is { } reason)
+        {
+            Skip = reason;
+        }
+    }
+
+    private static string? Probe()
+    {
+        string folder = Path.Combine(Path.GetTempPath(), "loaddiff-immutable-probe-" + Guid.NewGuid().ToString("N"));
+        Directory.CreateDirectory(folder);
+        try
+        {
+            if (!Run("+i", folder, out string why))
+            {
+                return $"needs 'chattr +i' on {Path.GetTempPath()} ({why}): root and a file system with the immutable attribute";
+            }
+            try
+            {
+                File.WriteAllText(Path.Combine(folder, "probe"), "");
+                return $"a folder made immutable on {Path.GetTempPath()} still accepts files";
+            }
+            catch (Exception e) when (e is UnauthorizedAccessException or IOException)
+            {
+                return null;
+            }
+            finally
+            {
+                Run("-i", folder, out _);
+            }
+        }
+        finally
+        {
+            Directory.Delete(folder, recursive: true);
+        }
+    }
+
+    private static bool Run(string flag, string path, out string error)
+    {
+        try
+        {
+            using var p = Process.Start(new ProcessStartInfo("chattr", [flag, path]) { RedirectStandardError = true, UseShellExecute = false })!;
+            error = p.StandardError.ReadToEnd().Trim();
+            p.WaitForExit();
+            return p.ExitCode == 0;
+        }
+        catch (System.ComponentModel.Win32Exception e)
+        {
+            error = e.Message;
+            return false;
+        }
     }
 }
