@@ -66,7 +66,7 @@ public class LoadDistributorFeasibilityTests
     public void A_gross_moment_scale_widens_the_allowance_through_the_force_scale()
     {
         // momentScale 1e4: F_s = max(1000, 1e4/ℓ) = 1e4/ℓ, so the allowance is 1e-9 × max(1e4, (1e4/ℓ) ℓ) = 1e-5.
-        // (Dividing by ℓ matters: multiplying would give 1e4 ℓ² ≈ 6667 and an allowance of 6.7e-6.)
+        // (M_s itself also bounds the allowance from below, so here the F_s route and the M_s route agree.)
         Assert.True(Twist(8e-6, forceScale: 1000, momentScale: 1e4).Feasible);
         Assert.False(Twist(1.2e-5, forceScale: 1000, momentScale: 1e4).Feasible);
         // The load's own moment counts even when the stated moment scale is smaller: |M| = 1e4 itself.
