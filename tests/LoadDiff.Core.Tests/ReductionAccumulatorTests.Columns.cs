@@ -94,7 +94,18 @@ public partial class ReductionAccumulatorTests
     {
         var acc = new ReductionAccumulator();
         double[] three = [1, 2, 3], two = [1, 2];
-        Assert.Throws<ArgumentException>(() => acc.AddPointForces(three, three, three, three, three, two, new double[3]));
+        // each of the five columns after x, one at a time, and a magnitudes span shorter than the rows
+        for (int k = 1; k < 6; k++)
+        {
+            double[][] c = [three, three, three, three, three, three];
+            c[k] = two;
+            Assert.Throws<ArgumentException>(() => acc.AddPointForces(c[0], c[1], c[2], c[3], c[4], c[5], new double[3]));
+        }
+        Assert.Throws<ArgumentException>(() => acc.AddPointForces(three, three, three, three, three, three, new double[2]));
+        // a longer magnitudes span is allowed (a reused buffer)
+        Assert.True(acc.AddPointForces(three, three, three, three, three, three, new double[4]));
+        Assert.Equal(3, acc.Count);
+        acc = new ReductionAccumulator();
         Assert.True(acc.AddPointForces([], [], [], [], [], [], []));
         Assert.Equal(0, acc.Count);
     }
