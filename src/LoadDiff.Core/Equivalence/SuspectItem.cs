@@ -22,6 +22,10 @@ public enum SuspectKind
 public sealed record SuspectItem(string Id, bool InOriginal, string? Case, double Factor, SuspectKind Kind)
 {
     /// <inheritdoc/>
-    public override string ToString() => string.Create(System.Globalization.CultureInfo.InvariantCulture,
-        $"{(InOriginal ? "original" : "substitute")} item {Id}{(Case is null ? "" : $" of case {Case} (×{Factor:R})")}: {Kind}");
+    public override string ToString()
+    {
+        // the nested part is formatted on its own, so it needs the invariant culture of its own
+        string where = Case is null ? "" : string.Create(System.Globalization.CultureInfo.InvariantCulture, $" of case {Case} (×{Factor:R})");
+        return $"{(InOriginal ? "original" : "substitute")} item {Id}{where}: {Kind}";
+    }
 }
