@@ -3,6 +3,7 @@ using System.Security.Cryptography;
 using System.Text.Json;
 using System.Xml.Linq;
 using LoadDiff.Cli.Tests.Support;
+using static LoadDiff.Cli.Tests.Support.HandStatics;
 
 namespace LoadDiff.Cli.Tests;
 
@@ -17,6 +18,67 @@ public class CheckCommandTests
     private static JsonElement Case(JsonDocument doc, string name) =>
         doc.RootElement.GetProperty("cases").EnumerateArray().Single(c => c.GetProperty("name").GetString() == name);
 
+    // Closed-form reductions are compared at 1e-12 of their scale (G_F for forces, G_M = G_F·D for moments), as
+    // CHECK-VALUES.md asks; the text's 6 significant digits at half a unit of the 6th digit.
+    private const decimal ClosedForm = 1e-12m;
+    private const decimal SixDigits = 5e-6m;
+
+    // rel = 1e-3 is the default relative tolerance (common practice, no source: CHECK-VALUES.md); no F, M or --length.
+    private const decimal DefaultRel = 1e-3m;
+
+    /// <summary>
+    /// Every case and combination of a footbridge check (JSON) against the files reduced by hand (<see cref="FootbridgeByHand"/>):
+    /// the reference point (the original's load centroid), R and M of both systems about it, and the tolerance rule of
+    /// SPEC §4 worked by hand: G_F = Σ|F| of the original, D the diagonal of the original's loaded box, G_M = G_F·D (no free
+    /// couples), allowances rel·G_F and rel·G_M; |ΔR|, |ΔM| at the point and the largest |ΔM_Q| over the corners Q of the
+    /// union of both loaded boxes; the verdict |ΔR| ≤ rel·G_F and worst |ΔM_Q| ≤ rel·G_M.
+    /// </summary>
+    private static void AssertFootbridgeByHand(
+        JsonDocument doc, IReadOnlyDictionary<string, HandCase> original, IReadOnlyDictionary<string, HandCase> substitute, params string[] only)
+    {
+        Dec3 p = FootbridgeByHand.LoadCentroid(original);
+        Close(p, doc.RootElement.GetProperty("reference_point"), ClosedForm * 24, "reference point (load centroid)");
+        var expected = FootbridgeByHand.Entries(original).Zip(FootbridgeByHand.Entries(substitute))
+            .Where(e => only.Length == 0 || only.Contains(e.First.Name)).ToList();
+        Assert.Equal(expected.Select(e => e.First.Name), doc.RootElement.GetProperty("cases").EnumerateArray().Select(c => c.GetProperty("name").GetString()));
+        bool all = true;
+        foreach (((string name, string kind, HandCase a), (_, _, HandCase b)) in expected)
+        {
+            JsonElement c = Case(doc, name);
+            Assert.Equal(kind, c.GetProperty("kind").GetString());
+            decimal gf = a.GrossForce, d = a.Diagonal, gm = gf * d;
+            decimal tolF = ClosedForm * gf, tolM = ClosedForm * gm;
+            Close(a.Resultant, c.GetProperty("original").GetProperty("force"), tolF, name + " original R");
+            Close(a.MomentAbout(p), c.GetProperty("original").GetProperty("moment"), tolM, name + " original M");
+            Close(b.Resultant, c.GetProperty("substitute").GetProperty("force"), tolF, name + " substitute R");
+            Close(b.MomentAbout(p), c.GetProperty("substitute").GetProperty("moment"), tolM, name + " substitute M");
+            Close(gf, c.GetProperty("original").GetProperty("gross_force"), tolF, name + " G_F");
+
+            JsonElement tol = c.GetProperty("tolerance");
+            Close(gf, tol.GetProperty("gross_force"), tolF, name + " G_F of the rule");
+            Close(d, tol.GetProperty("box_diagonal"), ClosedForm * d, name + " D");
+            Close(gm, tol.GetProperty("gross_moment"), tolM, name + " G_M");
+            Close(DefaultRel * gf, tol.GetProperty("force"), tolF, name + " force allowance rel·G_F");
+            Close(DefaultRel * gm, tol.GetProperty("moment"), tolM, name + " moment allowance rel·G_M");
+            Assert.Equal("relative", tol.GetProperty("force_governed_by").GetString());
+            Assert.Equal("relative", tol.GetProperty("moment_governed_by").GetString());
+
+            // Residual = substitute − original.
+            Dec3 dR = b.Resultant - a.Resultant;
+            JsonElement r = c.GetProperty("residual");
+            Close(dR, r.GetProperty("force"), tolF, name + " ΔR");
+            Close(dR.Norm, r.GetProperty("force_norm"), tolF, name + " |ΔR|");
+            Close((b.MomentAbout(p) - a.MomentAbout(p)).Norm, r.GetProperty("moment_norm"), tolM, name + " |ΔM| at the point");
+            (Dec3 min, Dec3 max) = HandCase.Union(a, b);
+            decimal worst = new HandCase([], min, max).Corners.Max(q => (b.MomentAbout(q) - a.MomentAbout(q)).Norm);
+            Close(worst, r.GetProperty("worst_moment_norm"), tolM, name + " worst |ΔM_Q| over the corners");
+            bool pass = dR.Norm <= DefaultRel * gf && worst <= DefaultRel * gm;
+            Assert.True(pass == c.GetProperty("equivalent").GetBoolean(), name + " verdict: by hand " + (pass ? "pass" : "fail"));
+            all &= pass;
+        }
+        Assert.Equal(all, doc.RootElement.GetProperty("equivalent").GetBoolean());
+    }
+
     [Fact]
     public void Equivalent_demo_pair_exits_0()
     {
@@ -25,6 +87,25 @@ public class CheckCommandTests
         Assert.Contains("Result: EQUIVALENT", run.Stdout);
         Assert.Contains("common practice, no published source", run.Stdout);
         Assert.Contains("Saint-Venant", run.Stdout);
+        // The summary table, one row per case and combination, against the hand rule (6 significant digits):
+        // name kind verdict |ΔR| allowed worst|ΔM| allowed governs. The pair agrees exactly by hand (every girder
+        // line, axle and wind line carries the detailed loads' totals on the same lines of action), so |ΔR| = |ΔM| = 0.
+        foreach ((string name, string kind, HandCase a) in FootbridgeByHand.Entries(FootbridgeByHand.Detailed))
+        {
+            string[] row = run.Stdout.Split('\n').Select(l => l.Split(' ', StringSplitOptions.RemoveEmptyEntries))
+                .Single(t => t.Length == 8 && t[0] == name);
+            Assert.Equal([kind, "PASS"], row[1..3]);
+            decimal Num(int i) => decimal.Parse(row[i], NumberStyles.Float, CultureInfo.InvariantCulture);
+            decimal allowF = DefaultRel * a.GrossForce, allowM = DefaultRel * a.GrossForce * a.Diagonal;
+            Close(0, Num(3), 0, name + " |ΔR| (text)");
+            Close(allowF, Num(4), SixDigits * allowF, name + " force allowance (text)");
+            Close(0, Num(5), 0, name + " worst |ΔM| (text)");
+            Close(allowM, Num(6), SixDigits * allowM, name + " moment allowance (text)");
+        }
+        CliRun json = CliProcess.Run("check", Detailed, Simplified, "--format", "json");
+        Assert.True(json.ExitCode == 0, json.ToString());
+        using JsonDocument doc = JsonDocument.Parse(json.Stdout);
+        AssertFootbridgeByHand(doc, FootbridgeByHand.Detailed, FootbridgeByHand.Simplified);
     }
 
     [Fact]
@@ -45,6 +126,13 @@ public class CheckCommandTests
         Assert.Equal(1, Math.Abs(residual.GetProperty("axis_direction")[2].GetDouble()), 12);
         Assert.True(Case(doc, "dead").GetProperty("equivalent").GetBoolean());
         Assert.False(Case(doc, "uls-vehicle").GetProperty("equivalent").GetBoolean());
+        AssertFootbridgeByHand(doc, FootbridgeByHand.Detailed, FootbridgeByHand.NoTank);
+        // The worst corner in closed form: the residual is the tank's weight W = 7.84532 kN reversed, so |ΔM_Q| = W × the
+        // horizontal distance from Q to the tank's line x = 12, y = 0. Vehicle box corners (10.5 or 13.5, ±0.8):
+        // √(1.5² + 0.8²) = 1.7 m, so 13.337044 kN·m against rel·G_F·D = 1e-3 × 67.84532 × √13 = 0.24462 kN·m.
+        Close(7.84532m * 1.7m, vehicle.GetProperty("residual").GetProperty("worst_moment_norm"), 1e-9m, "vehicle worst |ΔM_Q|");
+        // uls-vehicle: 1.5·W at the corners (0 or 24, ±1.5) of the deck box: 11.76798 kN × √(12² + 1.5²) m.
+        Close(1.5m * 7.84532m * HandStatics.Sqrt(146.25m), Case(doc, "uls-vehicle").GetProperty("residual").GetProperty("worst_moment_norm"), 1e-9m, "uls-vehicle worst |ΔM_Q|");
     }
 
     [Fact]
@@ -113,6 +201,12 @@ public class CheckCommandTests
         CliRun run = CliProcess.Run("check", Detailed, NoTank, "--case", "dead", "--case", "wind");
         Assert.True(run.ExitCode == 0, run.ToString());
         Assert.DoesNotContain("vehicle", run.Stdout);
+        // The same narrowed check in JSON: exactly dead and wind, each against the hand values (the tank is in neither).
+        // The reference point stays the load centroid of the whole original file (SPEC §4: the original's load centroid).
+        CliRun json = CliProcess.Run("check", Detailed, NoTank, "--case", "dead", "--case", "wind", "--format", "json");
+        Assert.True(json.ExitCode == 0, json.ToString());
+        using JsonDocument doc = JsonDocument.Parse(json.Stdout);
+        AssertFootbridgeByHand(doc, FootbridgeByHand.Detailed, FootbridgeByHand.NoTank, "dead", "wind");
     }
 
     [Fact]

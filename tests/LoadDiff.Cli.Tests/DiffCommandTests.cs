@@ -1,5 +1,6 @@
 using System.Text.Json;
 using LoadDiff.Cli.Tests.Support;
+using static LoadDiff.Cli.Tests.Support.HandStatics;
 
 namespace LoadDiff.Cli.Tests;
 
@@ -50,6 +51,10 @@ public class DiffCommandTests
         JsonElement dead = doc.RootElement.GetProperty("resultants")[0];
         // hand: ΔR = −2 + 20 − 5 = +13 kN in z
         Assert.Equal(13, dead.GetProperty("delta_force")[2].GetDouble());
+        // ΔM about the origin, M = r × F per change (all at y = z = 0, so only M_y = −x·F_z): p1 −(1·−2) = +2,
+        // p2 removed −(4·+20) = −80, p3 added −(2·−5) = +10: ΔM_y = −68 kN·m.
+        Close(new Dec3(0, -68, 0), dead.GetProperty("delta_moment"), 1e-12m * 80, "ΔM about the origin");
+        Close(new Dec3(0, 0, 13), dead.GetProperty("delta_force"), 1e-12m * 20, "ΔR");
     }
 
     [Fact]
@@ -64,6 +69,53 @@ public class DiffCommandTests
         Assert.Contains("+ added    lighting-column (force)", run.Stdout);
         Assert.Contains("@@", run.Stdout);
         Assert.DoesNotContain("\u001b[", run.Stdout); // not a terminal: no colour
+    }
+
+    [Fact]
+    public void Demo_revision_changes_of_the_resultants_match_hand_statics()
+    {
+        CliRun run = CliProcess.Run("diff", Detailed, RevisionB, "--format", "json");
+        Assert.True(run.ExitCode == 1, run.ToString());
+        using JsonDocument doc = JsonDocument.Parse(run.Stdout);
+        // Moments about the old file's load centroid (SPEC §4's convention, the point stated in the output).
+        Dec3 p = FootbridgeByHand.LoadCentroid(FootbridgeByHand.Detailed);
+        Close(p, doc.RootElement.GetProperty("reference_point"), 1e-12m * 24, "reference point");
+        var oldEntries = FootbridgeByHand.Entries(FootbridgeByHand.Detailed).ToList();
+        var newEntries = FootbridgeByHand.Entries(FootbridgeByHand.RevisionB).ToList();
+        JsonElement[] resultants = [.. doc.RootElement.GetProperty("resultants").EnumerateArray()];
+        Assert.Equal(oldEntries.Select(e => e.Name), resultants.Select(r => r.GetProperty("name").GetString()));
+        foreach (((string name, string kind, HandCase a), (_, _, HandCase b), JsonElement r) in oldEntries.Zip(newEntries, resultants))
+        {
+            // Revision B by hand: dead + 1.8 kN at (12, 1.5, 0); vehicle rear wheels −2 kN each at (10.5, ±0.8, 0) and the
+            // tank +200 kg = 1.96133 kN at (12, 0, 1.2); surfacing and wind unchanged; combinations their factored sums.
+            Assert.Equal(kind, r.GetProperty("kind").GetString());
+            decimal tolF = 1e-12m * b.GrossForce, tolM = tolF * 24;
+            Close(a.Resultant, r.GetProperty("old").GetProperty("force"), tolF, name + " old R");
+            Close(a.MomentAbout(p), r.GetProperty("old").GetProperty("moment"), tolM, name + " old M");
+            Close(b.Resultant, r.GetProperty("new").GetProperty("force"), tolF, name + " new R");
+            Close(b.MomentAbout(p), r.GetProperty("new").GetProperty("moment"), tolM, name + " new M");
+            Dec3 dR = b.Resultant - a.Resultant, dM = b.MomentAbout(p) - a.MomentAbout(p);
+            Close(dR, r.GetProperty("delta_force"), tolF, name + " ΔR");
+            Close(dM, r.GetProperty("delta_moment"), tolM, name + " ΔM");
+            Assert.Equal(dR == Dec3.Zero && dM == Dec3.Zero, r.GetProperty("unchanged").GetBoolean());
+        }
+        // uls-vehicle in closed form: ΔR_z = −(1.35·1.8 + 1.5·(2·2 + 1.96133)) = −11.371995 kN (EN 1990 (6.10) factors of the file).
+        Close(-11.371995m, resultants.Single(r => r.GetProperty("name").GetString() == "uls-vehicle").GetProperty("delta_force")[2], 1e-9m, "uls-vehicle ΔR_z");
+
+        // Each changed item's own contribution ΔR_i = ΔF_i, ΔM_i = (r_i − P) × ΔF_i.
+        var items = doc.RootElement.GetProperty("items").EnumerateArray().ToDictionary(i => i.GetProperty("id").GetString()!);
+        foreach ((string id, Dec3 at, Dec3 dF) in new[]
+        {
+            ("lighting-column", new Dec3(12, 1.5m, 0), new Dec3(0, 0, -1.8m)),
+            ("rear-left", new Dec3(10.5m, -0.8m, 0), new Dec3(0, 0, -2)),
+            ("rear-right", new Dec3(10.5m, 0.8m, 0), new Dec3(0, 0, -2)),
+            ("water-tank", new Dec3(12, 0, 1.2m), new Dec3(0, 0, -200 * 9.80665m / 1000)), // (1000 − 800) kg × g_n
+        })
+        {
+            Close(dF, items[id].GetProperty("delta_force"), 1e-12m * 2, id + " ΔR_i");
+            Close(Dec3.Cross(at - p, dF), items[id].GetProperty("delta_moment"), 1e-12m * 2 * 24, id + " ΔM_i");
+        }
+        Assert.Equal(4, items.Count);
     }
 
     [Fact]

@@ -1,10 +1,23 @@
+using System.Globalization;
 using System.Text.Json;
+using System.Text.RegularExpressions;
 using LoadDiff.Cli.Tests.Support;
+using static LoadDiff.Cli.Tests.Support.HandStatics;
 
 namespace LoadDiff.Cli.Tests;
 
-public class ReduceCommandTests
+public partial class ReduceCommandTests
 {
+    // Closed-form reductions at 1e-12 of their scale (CHECK-VALUES.md); text at half a unit of its 6th significant digit.
+    private const decimal ClosedForm = 1e-12m;
+    private const decimal SixDigits = 5e-6m;
+
+    [GeneratedRegex(@"^(?:Case|Combination) ""(?<name>[^""]+)""")]
+    private static partial Regex EntryHeading();
+
+    [GeneratedRegex(@"^\s+(?<what>Resultant force R|Moment M about the point)\s+\((?<v>[^)]*)\)")]
+    private static partial Regex VectorLine();
+
     [Fact]
     public void Reduce_of_the_demo_file_exits_0_and_states_the_reference_point_and_caution()
     {
@@ -13,6 +26,81 @@ public class ReduceCommandTests
         Assert.Contains("Reference point:  (0, 0, 0) m (origin)", run.Stdout);
         Assert.Contains("Saint-Venant", run.Stdout);
         Assert.Equal("", run.Stderr);
+        // R and M about the origin of every case and combination as printed (6 significant digits), against hand sums
+        // (FootbridgeByHand: e.g. dead R = −326.4 kN z, M_y = 326.4 × 12 = 3916.8 kN·m, the loads' centroid at x = 12).
+        var printed = new Dictionary<string, Dictionary<string, Dec3>>();
+        string? current = null;
+        foreach (string line in run.Stdout.Split('\n'))
+        {
+            if (EntryHeading().Match(line) is { Success: true } h)
+            {
+                current = h.Groups["name"].Value;
+                printed[current] = [];
+            }
+            else if (current is not null && VectorLine().Match(line) is { Success: true } v)
+            {
+                decimal[] c = [.. v.Groups["v"].Value.Split(',').Select(x => decimal.Parse(x, NumberStyles.Float, CultureInfo.InvariantCulture))];
+                printed[current][v.Groups["what"].Value] = new Dec3(c[0], c[1], c[2]);
+            }
+        }
+        var entries = FootbridgeByHand.Entries(FootbridgeByHand.Detailed).ToList();
+        Assert.Equal(entries.Select(e => e.Name), printed.Keys);
+        foreach ((string name, _, HandCase hand) in entries)
+        {
+            Dec3 r = hand.Resultant, m = hand.MomentAbout(Dec3.Zero);
+            AssertSixDigits(r, printed[name]["Resultant force R"], name + " R");
+            AssertSixDigits(m, printed[name]["Moment M about the point"], name + " M about the origin");
+        }
+    }
+
+    private static void AssertSixDigits(Dec3 expected, Dec3 printed, string what)
+    {
+        decimal tol = SixDigits * expected.Norm;
+        Close(expected.X, printed.X, tol, what + " x");
+        Close(expected.Y, printed.Y, tol, what + " y");
+        Close(expected.Z, printed.Z, tol, what + " z");
+    }
+
+    [Theory]
+    [InlineData("midspan", "12", "0", "0")] // the file's named point midspan = (12, 0, 0)
+    [InlineData("1.5,2,-3", "1.5", "2", "-3")]
+    [InlineData("0,0,0", "0", "0", "0")]
+    public void Json_moments_about_the_stated_point_match_hand_sums_for_every_case_and_combination(string at, string x, string y, string z)
+    {
+        CliRun run = CliProcess.Run("reduce", CliProcess.Fixture("footbridge", "detailed.loads.json"), "--at", at, "--format", "json");
+        Assert.True(run.ExitCode == 0, run.ToString());
+        using JsonDocument doc = JsonDocument.Parse(run.Stdout);
+        var p = new Dec3(decimal.Parse(x, CultureInfo.InvariantCulture), decimal.Parse(y, CultureInfo.InvariantCulture), decimal.Parse(z, CultureInfo.InvariantCulture));
+        Close(p, doc.RootElement.GetProperty("reference_point"), 0, "reference point");
+        var entries = FootbridgeByHand.Entries(FootbridgeByHand.Detailed).ToList();
+        JsonElement[] cases = [.. doc.RootElement.GetProperty("cases").EnumerateArray()];
+        Assert.Equal(entries.Select(e => e.Name), cases.Select(c => c.GetProperty("name").GetString()));
+        foreach (((string name, string kind, HandCase hand), JsonElement c) in entries.Zip(cases))
+        {
+            Assert.Equal(kind, c.GetProperty("kind").GetString());
+            decimal gf = hand.GrossForce, scale = gf * 24; // forces at most 24 m from any of these points
+            Dec3 r = hand.Resultant, m = hand.MomentAbout(p);
+            // R = Σ F_i, M_P = Σ (r_i − P) × F_i (SPEC §2; statics, any text).
+            Close(r, c.GetProperty("force"), ClosedForm * gf, name + " R");
+            Close(m, c.GetProperty("moment"), ClosedForm * scale, name + " M about " + at);
+            Close(gf, c.GetProperty("gross_force"), ClosedForm * gf, name + " G_F = Σ|F|");
+            // Load centroid Σ|F_i| r_i / Σ|F_i| (SPEC §4), a combination's with |factor|·|F_i|.
+            Dec3 centroid = hand.Forces.Aggregate(Dec3.Zero, (s, f) => s + (f.Force.Norm * f.At)) / gf;
+            Close(centroid, c.GetProperty("centroid"), ClosedForm * 24, name + " load centroid");
+            // Poinsot (Murray, Li & Sastry 1994, ch. 2): pitch p = R·M_P/|R|², central axis through P + R × M_P/|R|²
+            // along R. The cases are parallel systems (pitch 0, a single force); a combination adds the horizontal wind
+            // to the vertical loads, whose moments are not perpendicular to R: a wrench.
+            decimal r2 = (r.X * r.X) + (r.Y * r.Y) + (r.Z * r.Z);
+            decimal pitch = ((r.X * m.X) + (r.Y * m.Y) + (r.Z * m.Z)) / r2;
+            Close(pitch, c.GetProperty("pitch"), ClosedForm * 24, name + " pitch");
+            Assert.Equal(kind == "case" ? "force" : "wrench", c.GetProperty("system").GetString());
+            Assert.Equal(kind == "case", c.GetProperty("single_force").GetBoolean());
+            // The stated axis point lies on the central axis: its offset from P + R × M/|R|² is parallel to R.
+            Dec3 onAxis = p + (Dec3.Cross(r, m) / r2);
+            Dec3 off = Dec3.Cross(Dec3Of(c.GetProperty("axis_point")) - onAxis, r / r.Norm);
+            Close(0, off.Norm, ClosedForm * 24, name + " axis point off the central axis");
+            Close(r / r.Norm, c.GetProperty("axis_direction"), ClosedForm, name + " axis direction R/|R|");
+        }
     }
 
     [Fact]
@@ -36,6 +124,9 @@ public class ReduceCommandTests
         // Hand check (statics of parallel forces): 2·20 + 2·10 kN wheels plus 800 kg × 9.80665 m/s² = 7.84532 kN.
         double fz = c.GetProperty("force")[2].GetDouble();
         Assert.Equal(-(60 + (0.8 * 9.80665)), fz, 12);
+        // About the origin M_y = Σ x_i·|F_i| = 40·10.5 + 20·13.5 + 7.84532·12 = 784.14384 kN·m; M_x = Σ y_i·F_z,i = 0
+        // (the wheels stand at y = ±0.8 in equal pairs, the tank on y = 0).
+        Close(new Dec3(0, 784.14384m, 0), c.GetProperty("moment"), 1e-12m * 784.14384m, "vehicle M about the origin");
         // Centre of parallel forces: x̄ = Σ F x / Σ F = (40·10.5 + 20·13.5 + 7.84532·12) / 67.84532.
         double x = c.GetProperty("centre_of_parallel_forces")[0].GetDouble();
         Assert.Equal(((40 * 10.5) + (20 * 13.5) + (7.84532 * 12)) / 67.84532, x, 12);

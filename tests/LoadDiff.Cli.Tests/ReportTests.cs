@@ -199,11 +199,4 @@ public partial class ReportTests
 
     internal static IEnumerable<XElement> Rows(XDocument doc) =>
         doc.Descendants("table").Single(e => (string?)e.Attribute("id") == "summary").Element("tbody")!.Elements("tr");
-
-    internal static int CaseCount(params string[] args)
-    {
-        CliRun run = CliProcess.Run([.. args, "--format", "json"]);
-        using JsonDocument json = JsonDocument.Parse(run.Stdout);
-        return json.RootElement.GetProperty("cases").GetArrayLength();
-    }
 }

@@ -106,6 +106,64 @@ public class SectionsCommandTests
         Assert.Contains("V (kN)", text);
         Assert.Contains("M (kN·m)", text);
         Assert.Contains("station s (m)", text);
+
+        // Read the drawn lines back as a person reads the chart, through the labelled grid lines of each panel, and
+        // compare them with the closed forms at the default stations s = 0, 0.5, …, 10 m. Loads on a cut count on its
+        // negative side (the command's stated convention), so the reaction at 0 is in from s = 0 and the one at 10 at s = 10.
+        // Original (AISC Manual, Beam Diagrams and Formulas, Case 1): V = wl/2 − w s = 35 − 7s, M = wls/2 − ws²/2 = 35s − 3.5s².
+        // Substitute, by statics of the free body: V = 35 before the 70 kN load at 5, −35 from 5, and M = 35s up to 5,
+        // 35s − 70(s − 5) = 350 − 35s after. Both V are 0 at s = 10, where the second reaction joins the cut side.
+        static decimal OriginalV(decimal s) => s < 10 ? 35 - (7 * s) : 0;
+        static decimal OriginalM(decimal s) => (35 * s) - (3.5m * s * s);
+        static decimal SubstituteV(decimal s) => s < 5 ? 35 : s < 10 ? -35 : 0;
+        static decimal SubstituteM(decimal s) => s <= 5 ? 35 * s : 350 - (35 * s);
+        Assert.Equal(2, svg.Root.Elements(ns + "g").Count());
+        foreach (XElement panel in svg.Root.Elements(ns + "g"))
+        {
+            string title = panel.Elements(ns + "text").First().Value;
+            bool force = title.Contains("force V(s)", StringComparison.Ordinal);
+            Assert.True(force || title.Contains("moment M(s)", StringComparison.Ordinal), title);
+            (Func<decimal, decimal> toValue, decimal perPixel) = Scale(panel, ns, "end", "y");
+            (Func<decimal, decimal> toStation, decimal perPixelS) = Scale(panel, ns, "middle", "x");
+            foreach (XElement line in panel.Elements(ns + "polyline"))
+            {
+                bool dashed = line.Attribute("stroke-dasharray") is not null;
+                Func<decimal, decimal> closed = (force, dashed) switch
+                {
+                    (true, false) => OriginalV,
+                    (true, true) => SubstituteV,
+                    (false, false) => OriginalM,
+                    (false, true) => SubstituteM,
+                };
+                decimal[][] points = [.. ((string)line.Attribute("points")!).Split(' ')
+                    .Select(pt => pt.Split(',').Select(v => decimal.Parse(v, CultureInfo.InvariantCulture)).ToArray())];
+                Assert.Equal(21, points.Length);
+                for (int i = 0; i < points.Length; i++)
+                {
+                    // Coordinates carry two decimals: the vertex and the two grid lines used for the scale together
+                    // stay well inside 0.05 px here.
+                    decimal station = i / 2m;
+                    HandStatics.Close(station, toStation(points[i][0]), 0.05m * perPixelS, $"{title}: station of vertex {i}");
+                    HandStatics.Close(closed(station), toValue(points[i][1]), 0.05m * perPixel, $"{title} {(dashed ? "substitute" : "original")} at s = {station}");
+                }
+            }
+        }
+    }
+
+    // The affine map from a pixel coordinate to the value of the panel's labelled grid lines (the first and last labels).
+    private static (Func<decimal, decimal> Map, decimal PerPixel) Scale(XElement panel, XNamespace ns, string anchor, string coordinate)
+    {
+        var labels = panel.Elements(ns + "text")
+            .Where(t => (string?)t.Attribute("text-anchor") == anchor && t.Attribute("transform") is null
+                && decimal.TryParse(t.Value, NumberStyles.Float, CultureInfo.InvariantCulture, out _))
+            .Select(t => (Pixel: decimal.Parse((string)t.Attribute(coordinate)!, CultureInfo.InvariantCulture),
+                Value: decimal.Parse(t.Value, NumberStyles.Float, CultureInfo.InvariantCulture)))
+            .ToList();
+        Assert.True(labels.Count >= 2, "fewer than two labelled grid lines");
+        (decimal p0, decimal v0) = labels[0];
+        (decimal p1, decimal v1) = labels[^1];
+        decimal k = (v1 - v0) / (p1 - p0);
+        return (pixel => v0 + ((pixel - p0) * k), Math.Abs(k));
     }
 
     [Fact]
@@ -159,19 +217,48 @@ public class SectionsCommandTests
         Assert.Equal(2, CliProcess.Run("check", a, b, "--section-tol", "0.1").ExitCode);
     }
 
-    [Fact]
-    public void Footbridge_vehicle_case_cut_along_the_span_matches_at_the_ends()
+    [Theory]
+    [InlineData("vehicle")]
+    [InlineData("dead")]
+    public void Footbridge_cuts_along_the_span_match_the_statics_of_the_cut_side(string caseName)
     {
         CliRun run = CliProcess.Run("sections", CliProcess.Fixture("footbridge", "detailed.loads.json"),
-            CliProcess.Fixture("footbridge", "simplified.loads.json"), "--axis", "x", "--case", "vehicle", "--format", "json");
+            CliProcess.Fixture("footbridge", "simplified.loads.json"), "--axis", "x", "--case", caseName,
+            "--from", "0", "--to", "24", "--stations", "9", "--format", "json");
         Assert.True(run.ExitCode == 0, run.ToString());
         using JsonDocument doc = JsonDocument.Parse(run.Stdout);
-        JsonElement last = doc.RootElement.GetProperty("stations").EnumerateArray().Last();
-        double Dev(string k) => last.GetProperty(k).GetDouble();
-        // Past every load both reduce to their (equal) resultants about the same point; the tank is 1.2 m higher
-        // in the detailed file, which does not matter for a vertical force.
-        Assert.True(Dev("force_deviation") < 1e-9, Dev("force_deviation").ToString(CultureInfo.InvariantCulture));
-        Assert.True(Dev("moment_deviation") < 1e-9, Dev("moment_deviation").ToString(CultureInfo.InvariantCulture));
+        JsonElement[] stations = [.. doc.RootElement.GetProperty("stations").EnumerateArray()];
+        // Nine even stations 0, 3, …, 24 and the vehicle's item boundaries 10.5 and 13.5 (12, the tank, is an even one);
+        // the dead case's loads span 0…24 and add none.
+        decimal[] expected = caseName == "vehicle" ? [0, 3, 6, 9, 10.5m, 12, 13.5m, 15, 18, 21, 24] : [0, 3, 6, 9, 12, 15, 18, 21, 24];
+        Assert.Equal(expected, stations.Select(st => HandStatics.Dec(st.GetProperty("s"))));
+        foreach ((decimal s, JsonElement st) in expected.Zip(stations))
+        {
+            var cut = new Dec3(s, 0, 0); // origin + s·axis
+            (Dec3 v, Dec3 m) = caseName == "vehicle"
+                // The free body left of the cut: the wheels and the tank with x_i ≤ s, reduced to the cut point
+                // (V = Σ F_i, M = Σ (r_i − cut) × F_i); a load on the cut counts on the negative side. The detailed
+                // file's wheels at y = ±0.8 pair up, so M_x = 0 as for the centre-line axles, and the tank's height
+                // does not matter for a vertical force: both files give the same values.
+                ? (HandStatics.Resultant(FootbridgeByHand.Detailed["vehicle"].Forces.Where(f => f.At.X <= s)),
+                   HandStatics.MomentAbout(cut, FootbridgeByHand.Detailed["vehicle"].Forces.Where(f => f.At.X <= s)))
+                // Dead: w = 4·3 + 2·0.8 = 13.6 kN/m (detailed) = 2·6.8 (two girders), uniform across y about y = 0, so the
+                // cut side is the cantilever of AISC Case 19 (uniform load, cut at x from the free end): V = −w s,
+                // M_y = −w s²/2 (the load acts at s/2 behind the cut, (s/2)·(−w s) with M_y = (s − x)·F_z).
+                : (new Dec3(0, 0, -13.6m * s), new Dec3(0, -13.6m * s * s / 2, 0));
+            foreach (string side in new[] { "original", "substitute" })
+            {
+                // Largest values: 67.85 kN and 844 kN·m (vehicle), 326.4 kN and 3917 kN·m (dead): 1e-12 of 1e4.
+                HandStatics.Close(v, st.GetProperty(side).GetProperty("force"), 1e-8m, $"{caseName} {side} V at s = {s}");
+                HandStatics.Close(m, st.GetProperty(side).GetProperty("moment"), 1e-8m, $"{caseName} {side} M at s = {s}");
+            }
+            HandStatics.Close(0, st.GetProperty("force_deviation"), 1e-8m, "force deviation");
+            HandStatics.Close(0, st.GetProperty("moment_deviation"), 1e-8m, "moment deviation");
+        }
+        // The original's largest cut moment is at s = 24: vehicle Σ|F|·(24 − x̄) = 844.14384 kN·m
+        // (40·13.5 + 20·10.5 + 7.84532·12), dead 13.6·24²/2 = 3916.8 kN·m.
+        decimal peak = caseName == "vehicle" ? (40 * 13.5m) + (20 * 10.5m) + (7.84532m * 12) : 13.6m * 24 * 24 / 2;
+        HandStatics.Close(peak, doc.RootElement.GetProperty("original_peak_moment"), 1e-8m, "original peak |M|");
     }
 
     [Fact]
