@@ -105,7 +105,7 @@ public partial class AreaLoadTests
     {
         Gen<double> c = Gen.Double[-5, 5];
         Gen.Select(Gen.Double[0.5, 3].Array[8], Gen.Int[2, 6], Gen.Select(c, c, c, Vector3.Create), Gen.Select(c, c, c, Vector3.Create), c)
-            .Sample((radii, k, gradient, point, p0) =>
+            .SampleSeeded((radii, k, gradient, point, p0) =>
         {
             // A polygon star-shaped about its centre, in a tilted plane; splitting it through the centre gives two
             // simple polygons with the same orientation.

@@ -17,7 +17,7 @@ public partial class DoubleDoubleTests
     [Fact]
     public void TwoSum_randomDoubles_hiPlusLoIsExactSum()
     {
-        Gen.Select(Spread(300), Spread(300)).Sample((a, b) =>
+        Gen.Select(Spread(300), Spread(300)).SampleSeeded((a, b) =>
         {
             DoubleDouble s = DoubleDouble.TwoSum(a, b);
             Assert.Equal(Exact(a) + Exact(b), Exact(s));
@@ -28,7 +28,7 @@ public partial class DoubleDoubleTests
     [Fact]
     public void TwoSum_nearlyCancellingDoubles_hiPlusLoIsExactSum()
     {
-        Gen.Select(Spread(60), Gen.Int[1, 60]).Sample((a, k) =>
+        Gen.Select(Spread(60), Gen.Int[1, 60]).SampleSeeded((a, k) =>
         {
             double b = -a * (1 + Math.ScaleB(1, -k));
             Assert.Equal(Exact(a) + Exact(b), Exact(DoubleDouble.TwoSum(a, b)));
@@ -38,7 +38,7 @@ public partial class DoubleDoubleTests
     [Fact]
     public void TwoProduct_randomDoubles_hiPlusLoIsExactProduct()
     {
-        Gen.Select(Spread(400), Spread(400)).Sample((a, b) =>
+        Gen.Select(Spread(400), Spread(400)).SampleSeeded((a, b) =>
         {
             DoubleDouble p = DoubleDouble.TwoProduct(a, b);
             Assert.Equal(Exact(a) * Exact(b), Exact(p));
@@ -49,7 +49,7 @@ public partial class DoubleDoubleTests
     [Fact]
     public void Add_doubleDoubles_errorBelowTwoToMinus100OfOperands()
     {
-        Gen.Select(Spread(100), Spread(100), Spread(100), Spread(100)).Sample((a1, a2, b1, b2) =>
+        Gen.Select(Spread(100), Spread(100), Spread(100), Spread(100)).SampleSeeded((a1, a2, b1, b2) =>
         {
             DoubleDouble a = DoubleDouble.TwoSum(a1, a2), b = DoubleDouble.TwoSum(b1, b2);
             ExactRational exact = Exact(a) + Exact(b);
@@ -62,7 +62,7 @@ public partial class DoubleDoubleTests
     [Fact]
     public void Multiply_byDouble_errorBelowTwoToMinus100OfProduct()
     {
-        Gen.Select(Spread(100), Spread(100), Spread(100)).Sample((a1, a2, b) =>
+        Gen.Select(Spread(100), Spread(100), Spread(100)).SampleSeeded((a1, a2, b) =>
         {
             DoubleDouble a = DoubleDouble.TwoSum(a1, a2);
             ExactRational exact = Exact(a) * Exact(b);

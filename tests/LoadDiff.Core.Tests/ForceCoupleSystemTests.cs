@@ -24,7 +24,7 @@ public class ForceCoupleSystemTests
     [Fact]
     public void MoveTo_thereAndBack_sameMoment()
     {
-        Gen.Select(Vec, Vec, Vec, Vec).Sample((r, m, p, q) =>
+        Gen.Select(Vec, Vec, Vec, Vec).SampleSeeded((r, m, p, q) =>
         {
             var s = new ForceCoupleSystem(r, m, p);
             Close.Absolute(m, s.MoveTo(q).MoveTo(p).Moment, 1e-12 * (m.Length + (r.Length * (p - q).Length)));

@@ -21,7 +21,7 @@ public partial class ReductionAccumulatorTests
     public void ResultAt_otherPoint_obeysMomentTransfer()
     {
         // M_Q = M_P + (P − Q) × R (SPEC §2).
-        Gen.Select(Systems.System, Systems.Vec(-20, 20), Systems.Vec(-20, 20)).Sample((items, p, q) =>
+        Gen.Select(Systems.System, Systems.Vec(-20, 20), Systems.Vec(-20, 20)).SampleSeeded((items, p, q) =>
         {
             var acc = new ReductionAccumulator();
             foreach (LoadItem item in items)
@@ -42,7 +42,7 @@ public partial class ReductionAccumulatorTests
     [Fact]
     public void ResultAt_everyForceScaled_resultantAndMomentScale()
     {
-        Gen.Select(Systems.System, Gen.Double[-1000, 1000], Systems.Vec(-20, 20)).Sample((items, k, p) =>
+        Gen.Select(Systems.System, Gen.Double[-1000, 1000], Systems.Vec(-20, 20)).SampleSeeded((items, k, p) =>
         {
             LoadReduction plain = Reduce.About(p, items);
             LoadReduction scaled = Reduce.About(p, items.Select(i => Systems.Map(i, v => v, Vector3.Zero, k)));
@@ -55,7 +55,7 @@ public partial class ReductionAccumulatorTests
     [Fact]
     public void ResultAt_itemsShuffled_sameResultant()
     {
-        Gen.Select(Systems.System, Gen.Int, Systems.Vec(-20, 20)).Sample((items, seed, p) =>
+        Gen.Select(Systems.System, Gen.Int, Systems.Vec(-20, 20)).SampleSeeded((items, seed, p) =>
         {
             LoadItem[] shuffled = [.. items];
             new Random(seed).Shuffle(shuffled);
@@ -69,7 +69,7 @@ public partial class ReductionAccumulatorTests
     [Fact]
     public void ResultAt_systemRotatedAndTranslated_transformsAsVectors()
     {
-        Gen.Select(Systems.System, Systems.Rotation, Systems.Vec(-50, 50), Systems.Vec(-20, 20)).Sample((items, rotate, shift, p) =>
+        Gen.Select(Systems.System, Systems.Rotation, Systems.Vec(-50, 50), Systems.Vec(-20, 20)).SampleSeeded((items, rotate, shift, p) =>
         {
             LoadReduction a = Reduce.About(p, items);
             LoadReduction b = Reduce.About(rotate(p) + shift, items.Select(i => Systems.Map(i, rotate, shift)));
@@ -85,7 +85,7 @@ public partial class ReductionAccumulatorTests
     public void ResultAt_coordinatesOffsetByAMillionMetres_sameResult()
     {
         // The reference point is dyadic like the positions, so p + shift is exact too.
-        Gen.Select(Systems.System, Systems.Position).Sample((items, p) =>
+        Gen.Select(Systems.System, Systems.Position).SampleSeeded((items, p) =>
         {
             Vector3 shift = V(1e6, -2e6, 1e6);
             LoadReduction a = Reduce.About(p, items);
@@ -98,7 +98,7 @@ public partial class ReductionAccumulatorTests
     [Fact]
     public void AddScaled_mergedHalves_sameAsOneAccumulator()
     {
-        Gen.Select(Systems.System, Systems.System, Systems.Vec(-20, 20)).Sample((first, second, p) =>
+        Gen.Select(Systems.System, Systems.System, Systems.Vec(-20, 20)).SampleSeeded((first, second, p) =>
         {
             var a = new ReductionAccumulator();
             var b = new ReductionAccumulator();

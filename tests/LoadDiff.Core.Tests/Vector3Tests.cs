@@ -87,7 +87,7 @@ public class Vector3Tests
     [Fact]
     public void ToString_randomDoubles_roundTripsBitForBit()
     {
-        Gen.Select(AnyFinite, AnyFinite, AnyFinite).Sample((x, y, z) =>
+        Gen.Select(AnyFinite, AnyFinite, AnyFinite).SampleSeeded((x, y, z) =>
         {
             Vector3 v = Vector3.Create(x, y, z);
             Vector3 back = Parse(v.ToString(), ", ", CultureInfo.InvariantCulture);

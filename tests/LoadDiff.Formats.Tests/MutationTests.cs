@@ -53,7 +53,7 @@ public class MutationTests
         string path = Path.Combine(Repo(), relative);
         byte[] original = File.ReadAllBytes(path);
         string dir = Path.GetDirectoryName(path)!;
-        Mutations(original).Sample(bytes =>
+        Mutations(original).SampleSeeded(bytes =>
         {
             ReadResult r = LoadFileReader.ReadJson(bytes, "mutated.loads.json", dir, new ReductionSink());
             if (!r.Succeeded)
@@ -64,18 +64,18 @@ public class MutationTests
                 Assert.DoesNotContain('\n', e.ToString());
                 Assert.Single(r.Diagnostics, d => d.Severity == Severity.Error);
             }
-        }, iter: 400);
+        }, iter: 400, variant: Path.GetFileName(Path.GetDirectoryName(relative)) + "/" + Path.GetFileName(relative));
     }
 
     [Fact]
     public void Mutated_csv_is_read_or_rejected_with_one_located_error()
     {
         byte[] original = "id,x,y,z,fx,fy,fz\np1,1,2,3,0,0,-10\np2,4.5,-1,0,1e3,0,-2.25\n\"p,3\",0,0,0,0,0,1\n"u8.ToArray();
-        using var t = new TempFolder();
-        int n = 0;
-        Mutations(original).Sample(bytes =>
+        Mutations(original).SampleSeeded(bytes =>
         {
-            string path = t.WriteBytes($"m{n++}.csv", bytes);
+            // each case in a folder of its own: nothing is shared between cases
+            using var t = new TempFolder();
+            string path = t.WriteBytes("m.csv", bytes);
             foreach (ILoadSink sink in new ILoadSink[] { new ReductionSink(), new CollectingSink() })
             {
                 ReadResult r = LoadFileReader.Read(path, sink);

@@ -28,9 +28,6 @@ internal static class PlainRowScanner
 
     private const ulong MaxExact = 1UL << 53;
 
-    /// <summary>Takes the code written for processors without AVX2 and SSE4.1 (ARM, old x64) on any processor; for tests.</summary>
-    internal static bool Portable { get; set; }
-
     private static readonly double[] Powers = [1e0, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11, 1e12, 1e13, 1e14, 1e15, 1e16];
 
     private static readonly ulong[] IntegerPowers =
@@ -46,9 +43,14 @@ internal static class PlainRowScanner
     /// <paramref name="scales"/> as its digits (an exact, signed integer) and the power of ten to divide them by.
     /// The caller divides, many at a time: the quotient is the correctly rounded value.
     /// </summary>
+    /// <remarks>
+    /// <c>portable</c> takes the code written for processors without AVX2 and SSE4.1 (ARM, old x64) on any processor,
+    /// for tests; an argument rather than a setting, so that a test of that code cannot change what tests beside it run.
+    /// </remarks>
     /// <returns>The index of the line feed (or carriage return before it) that ends the line, or −1 to decline.</returns>
     [System.Runtime.CompilerServices.MethodImpl(System.Runtime.CompilerServices.MethodImplOptions.AggressiveOptimization)]
-    public static int TryScan(byte[] buffer, int pos, int[] valueOfField, Span<double> digits, Span<double> scales, int stride, int slot)
+    public static int TryScan(byte[] buffer, int pos, int[] valueOfField, Span<double> digits, Span<double> scales, int stride, int slot,
+        bool portable = false)
     {
         ref byte line = ref Unsafe.Add(ref MemoryMarshal.GetArrayDataReference(buffer), pos);
         // commas of the line, 64 bytes a mask; the line feed ends the line within the first 256 bytes or it is declined
@@ -57,7 +59,7 @@ internal static class PlainRowScanner
         bool quote = false;
         for (int chunk = 0; chunk < LongestLine / 64; chunk++)
         {
-            Classify(ref line, 64 * chunk, out ulong chunkCommas, out ulong feeds, out bool chunkQuote);
+            Classify(ref line, 64 * chunk, portable, out ulong chunkCommas, out ulong feeds, out bool chunkQuote);
             quote |= chunkQuote;
             if (feeds != 0)
             {
@@ -104,7 +106,7 @@ internal static class PlainRowScanner
             if (k >= 0)
             {
                 int at = (k * stride) + slot;
-                if ((uint)at >= (uint)columns || !TryNumber(ref Unsafe.Add(ref line, start), end - start, out double m, out double power))
+                if ((uint)at >= (uint)columns || !TryNumber(ref Unsafe.Add(ref line, start), end - start, portable, out double m, out double power))
                 {
                     return -1;
                 }
@@ -125,9 +127,9 @@ internal static class PlainRowScanner
 
     // Bit masks of the commas and line feeds among 64 bytes at offset, and whether a quote is among them.
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
-    private static void Classify(ref byte line, int offset, out ulong commas, out ulong feeds, out bool quote)
+    private static void Classify(ref byte line, int offset, bool portable, out ulong commas, out ulong feeds, out bool quote)
     {
-        if (Vector256.IsHardwareAccelerated && !Portable)
+        if (Vector256.IsHardwareAccelerated && !portable)
         {
             Vector256<byte> c = Vector256.Create((byte)','), n = Vector256.Create((byte)'\n'), q = Vector256.Create((byte)'"');
             Vector256<byte> a = Vector256.LoadUnsafe(ref line, (nuint)offset), b = Vector256.LoadUnsafe(ref line, (nuint)offset + 32);
@@ -152,7 +154,7 @@ internal static class PlainRowScanner
     // [+-]digits[.digits] of 1 to 16 characters in all, as ±mantissa / scale with an exact mantissa below 2⁵³ and
     // scale an exact power of ten (Clinger's condition); declines exponents and longer forms.
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
-    private static bool TryNumber(ref byte s, int length, out double value, out double scale)
+    private static bool TryNumber(ref byte s, int length, bool portable, out double value, out double scale)
     {
         value = 0;
         scale = 1;
@@ -176,7 +178,7 @@ internal static class PlainRowScanner
         int dot = dots == 0 ? length : BitOperations.TrailingZeroCount(dots);
         int whole = dot - sign;
         int fraction = dots == 0 ? 0 : length - dot - 1;
-        ulong mantissa = Sse41.IsSupported && !Portable
+        ulong mantissa = Sse41.IsSupported && !portable
             ? DigitsSimd(v, sign, whole, fraction)
             : (Digits(ref Unsafe.Add(ref s, sign), whole) * IntegerPowers[fraction]) + Digits(ref Unsafe.Add(ref s, dot + 1), fraction);
         if (mantissa > MaxExact)

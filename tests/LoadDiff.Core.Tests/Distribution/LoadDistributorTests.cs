@@ -135,7 +135,7 @@ public class LoadDistributorTests
     [Fact]
     public void Distribute_outputAlwaysPassesTheEquivalenceCheck()
     {
-        Gen.Select(Systems.System, GeneralPosition(8, 3, 9), Gen.Bool, Gen.Double[0.1, 10].Array[9]).Sample((items, at, couples, weights) =>
+        Gen.Select(Systems.System, GeneralPosition(8, 3, 9), Gen.Bool, Gen.Double[0.1, 10].Array[9]).SampleSeeded((items, at, couples, weights) =>
         {
             SupportPoint[] pts = [.. at.Select((p, i) => new SupportPoint("p" + i, p, weights[i]))];
             var d = new LoadDistributor(pts, couples);

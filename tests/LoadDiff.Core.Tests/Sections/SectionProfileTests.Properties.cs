@@ -23,7 +23,7 @@ public partial class SectionProfileTests
     [Fact]
     public void Compute_itemsSplitIntoPieces_sameProfileAtEveryStation()
     {
-        Gen.Select(PlanarSystem, AnyAxis, Gen.Double[0.1, 0.9], Gen.Double[-4, 4].Array[1, 12]).Sample((items, axis, t, raw) =>
+        Gen.Select(PlanarSystem, AnyAxis, Gen.Double[0.1, 0.9], Gen.Double[-4, 4].Array[1, 12]).SampleSeeded((items, axis, t, raw) =>
         {
             double[] stations = [.. raw.Order()];
             LoadItem[] split = [.. items.SelectMany(i => Split(i, t))];
