@@ -4,7 +4,7 @@ using LoadDiff.Core;
 using LoadDiff.Core.Loads;
 using LoadDiff.Core.Units;
 using LoadDiff.Reports.Html;
-using LoadDiff.Reports.Tests.Support;
+using LoadDiff.Tests.Support;
 
 namespace LoadDiff.Reports.Tests;
 

@@ -1,7 +1,7 @@
 using System.Globalization;
 using System.Xml.Linq;
 
-namespace LoadDiff.Reports.Tests.Support;
+namespace LoadDiff.Tests.Support;
 
 /// <summary>A straight arrow read from a drawing: its tail, its tip (the first point of its head) and what it draws.</summary>
 public sealed record DrawnArrow(double X1, double Y1, double TipX, double TipY, string Class, string? Item)
