@@ -141,6 +141,29 @@ public class SketchGeometryTests
         Assert.Equal(2.0, ay.Length / ax.Length, 0.02);
     }
 
+    [Fact]
+    public void A_force_in_the_drawing_plane_too_small_for_an_arrow_is_not_drawn_as_pointing_away_from_the_viewer()
+    {
+        // Invented: 30 kN and 0.2 kN, both along +x. To the drawing's scale the small one is under a pixel long; a circle
+        // with a cross would say it points into the plan (−z), which it does not. Its position is still marked.
+        PointForce[] forces =
+        [
+            new("large", Vector3.Create(0, 0, 0), Vector3.Create(30_000, 0, 0)),
+            new("small", Vector3.Create(4, 3, 0), Vector3.Create(200, 0, 0)),
+        ];
+        var d = Draw(SketchView.Plan, forces);
+        Assert.True(200 * d.PixelsPerUnit("N") < 1, "the small force is under a pixel to the drawing's scale");
+        var drawn = d.ForItem("small").ToList();
+        Assert.DoesNotContain(drawn, e => e.Name.LocalName == "path");
+        Assert.DoesNotContain(drawn, e => SvgDrawing.Class(e).StartsWith("sym ", StringComparison.Ordinal));
+        double k = d.PixelsPerLength("m");
+        (double px, double py) = d.ReferenceMark();
+        XElement mark = drawn.Single(e => e.Name.LocalName == "circle");
+        Assert.Equal(px + (k * (4 - Reference.X)), SvgDrawing.Num(mark, "cx"), Pixel);
+        Assert.Equal(py - (k * (3 - Reference.Y)), SvgDrawing.Num(mark, "cy"), Pixel);
+        AssertLabels(d, forces);
+    }
+
     private static SvgDrawing Draw(SketchView view, IReadOnlyList<LoadItem> items, IEnumerable<Vector3>? extra = null)
     {
         var s = new SystemSketch();

@@ -135,6 +135,11 @@ internal static partial class SvgSketch
         {
             Arrow(b, x - (sx * scale), y - (sy * scale), x, y, cls, item: item);
         }
+        else if (inPlane >= 0.25 * total)
+        {
+            // In the drawing plane but under a pixel to scale: the out-of-plane symbol would give it a false sense.
+            b.Circle(x, y, 1.2, "dot " + cls, item);
+        }
         else if (force.Length > 0)
         {
             OutOfPlane(b, x, y, 2.5 + (4.5 * relative), f.Toward(force) > 0, cls, item);
