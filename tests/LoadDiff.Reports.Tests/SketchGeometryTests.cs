@@ -164,6 +164,23 @@ public class SketchGeometryTests
         AssertLabels(d, forces);
     }
 
+    [Fact]
+    public void A_line_load_in_the_drawing_plane_too_small_for_arrows_is_not_drawn_as_pointing_away_from_the_viewer()
+    {
+        // Invented: 10 kN/m and 0.1 kN/m, both along −y, on members along x; the small one is under a pixel to scale.
+        LineLoad[] lines =
+        [
+            new("heavy", Vector3.Create(0, 0, 0), Vector3.Create(6, 0, 0), Vector3.Create(0, -10_000, 0), Vector3.Create(0, -10_000, 0)),
+            new("light", Vector3.Create(0, 3, 0), Vector3.Create(6, 3, 0), Vector3.Create(0, -100, 0), Vector3.Create(0, -100, 0)),
+        ];
+        var d = Draw(SketchView.Plan, lines);
+        Assert.True(100 * d.PixelsPerUnit("N/m") < 1, "the light load is under a pixel to the drawing's scale");
+        var drawn = d.ForItem("light").ToList();
+        Assert.DoesNotContain(drawn, e => e.Name.LocalName == "path");
+        Assert.DoesNotContain(drawn, e => SvgDrawing.Class(e).StartsWith("sym ", StringComparison.Ordinal));
+        Assert.Contains(drawn, e => SvgDrawing.Class(e).StartsWith("member ", StringComparison.Ordinal));
+    }
+
     private static SvgDrawing Draw(SketchView view, IReadOnlyList<LoadItem> items, IEnumerable<Vector3>? extra = null)
     {
         var s = new SystemSketch();

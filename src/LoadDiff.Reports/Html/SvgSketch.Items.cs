@@ -169,8 +169,10 @@ internal static partial class SvgSketch
                     Arrow(b, x - wx, y - wy, x, y, "thin " + cls, 4, l.Id);
                 }
             }
-            else
+            else if (shown < 0.25 * full)
             {
+                // Mostly along the line of sight. (In the plane but under a pixel to scale, the member alone is drawn:
+                // the out-of-plane symbol would give it a false sense.)
                 for (int k = 0; k < 3; k++)
                 {
                     double t = (k + 0.5) / 3;
