@@ -157,27 +157,29 @@ internal static partial class SvgSketch
             (double s2x, double s2y) = f.Screen(l.EndIntensity * sc.Line);
             double full = Math.Max(l.StartIntensity.Length, l.EndIntensity.Length) * sc.Line;
             double shown = Math.Max(Math.Sqrt((s1x * s1x) + (s1y * s1y)), Math.Sqrt((s2x * s2x) + (s2y * s2y)));
-            b.Line(ax, ay, bx, by, "member " + cls);
+            b.Line(ax, ay, bx, by, "member " + cls, l.Id);
             if (shown >= 0.25 * full && shown >= 1)
             {
-                b.Polygon([(ax, ay), (bx, by), (bx - s2x, by - s2y), (ax - s1x, ay - s1y)], "diag " + cls);
+                b.Polygon([(ax, ay), (bx, by), (bx - s2x, by - s2y), (ax - s1x, ay - s1y)], "diag " + cls, item: l.Id);
                 for (int k = 0; k < stations; k++)
                 {
                     double t = stations == 1 ? 0.5 : (double)k / (stations - 1);
                     double x = ax + ((bx - ax) * t), y = ay + ((by - ay) * t);
                     double wx = s1x + ((s2x - s1x) * t), wy = s1y + ((s2y - s1y) * t);
-                    Arrow(b, x - wx, y - wy, x, y, "thin " + cls, 4);
+                    Arrow(b, x - wx, y - wy, x, y, "thin " + cls, 4, l.Id);
                 }
             }
-            else
+            else if (shown < 0.25 * full)
             {
+                // Mostly along the line of sight. (In the plane but under a pixel to scale, the member alone is drawn:
+                // the out-of-plane symbol would give it a false sense.)
                 for (int k = 0; k < 3; k++)
                 {
                     double t = (k + 0.5) / 3;
                     Vector3 w = l.StartIntensity + ((l.EndIntensity - l.StartIntensity) * t);
                     if (w.Length > 0)
                     {
-                        OutOfPlane(b, ax + ((bx - ax) * t), ay + ((by - ay) * t), 2 + (3 * w.Length / sc.MaxLine), f.Toward(w) > 0, cls);
+                        OutOfPlane(b, ax + ((bx - ax) * t), ay + ((by - ay) * t), 2 + (3 * w.Length / sc.MaxLine), f.Toward(w) > 0, cls, l.Id);
                     }
                 }
             }
@@ -203,14 +205,14 @@ internal static partial class SvgSketch
         IReadOnlyList<SketchForce> forces = s.Forces;
         foreach (SketchForce force in forces)
         {
-            ForceAt(b, f, force.At, force.Value, sc.Force, force.Value.Length / sc.MaxForce, cls);
+            ForceAt(b, f, force.At, force.Value, sc.Force, force.Value.Length / sc.MaxForce, cls, force.Id);
         }
         if (forces.Count <= 6)
         {
             foreach (SketchForce force in forces)
             {
                 (double x, double y) = f.Map(force.At);
-                b.Text(x + 6, y - 4, $"{NumberText.Readable(force.Value.Length)} {units.Force.Symbol}", "lbl " + cls);
+                b.Text(x + 6, y - 4, $"{NumberText.Readable(force.Value.Length)} {units.Force.Symbol}", "lbl " + cls, item: force.Id);
             }
         }
     }
@@ -225,10 +227,10 @@ internal static partial class SvgSketch
             double toward = f.Toward(c.Value);
             if (Math.Abs(toward) > 1e-9 * sc.MaxCouple)
             {
-                CurvedArrow(b, x, y, 10 + (4 * i), toward > 0, cls);
+                CurvedArrow(b, x, y, 10 + (4 * i), toward > 0, cls, c.Id);
             }
             (double mx, double my) = f.Screen(c.Value * (SketchFrame.ArrowMax / sc.MaxCouple));
-            DoubleArrow(b, x, y, mx, my, cls);
+            DoubleArrow(b, x, y, mx, my, cls, c.Id);
             i++;
         }
     }

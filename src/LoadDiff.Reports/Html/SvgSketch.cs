@@ -109,7 +109,7 @@ internal static partial class SvgSketch
     }
 
     /// <summary>A straight arrow whose head is at (x2, y2).</summary>
-    private static void Arrow(SvgBuilder b, double x1, double y1, double x2, double y2, string cls, double head = HeadLength)
+    private static void Arrow(SvgBuilder b, double x1, double y1, double x2, double y2, string cls, double head = HeadLength, string? item = null)
     {
         double dx = x2 - x1, dy = y2 - y1;
         double len = Math.Sqrt((dx * dx) + (dy * dy));
@@ -120,12 +120,12 @@ internal static partial class SvgSketch
         double ux = dx / len, uy = dy / len;
         double h = Math.Min(head, len * 0.6);
         double bx = x2 - (ux * h), by = y2 - (uy * h);
-        b.Line(x1, y1, bx, by, cls);
-        b.Polygon([(x2, y2), (bx - (uy * h * 0.45), by + (ux * h * 0.45)), (bx + (uy * h * 0.45), by - (ux * h * 0.45))], "head " + cls);
+        b.Line(x1, y1, bx, by, cls, item);
+        b.Polygon([(x2, y2), (bx - (uy * h * 0.45), by + (ux * h * 0.45)), (bx + (uy * h * 0.45), by - (ux * h * 0.45))], "head " + cls, item: item);
     }
 
     /// <summary>A force vector ending at a point: an arrow of its in-plane part, or the out-of-plane symbol.</summary>
-    private static void ForceAt(SvgBuilder b, SketchFrame f, Vector3 at, Vector3 force, double scale, double relative, string cls)
+    private static void ForceAt(SvgBuilder b, SketchFrame f, Vector3 at, Vector3 force, double scale, double relative, string cls, string item)
     {
         (double x, double y) = f.Map(at);
         (double sx, double sy) = f.Screen(force);
@@ -133,56 +133,61 @@ internal static partial class SvgSketch
         double inPlane = Math.Sqrt((sx * sx) + (sy * sy)) * scale;
         if (inPlane >= 0.25 * total && inPlane >= 1)
         {
-            Arrow(b, x - (sx * scale), y - (sy * scale), x, y, cls);
+            Arrow(b, x - (sx * scale), y - (sy * scale), x, y, cls, item: item);
+        }
+        else if (inPlane >= 0.25 * total)
+        {
+            // In the drawing plane but under a pixel to scale: the out-of-plane symbol would give it a false sense.
+            b.Circle(x, y, 1.2, "dot " + cls, item);
         }
         else if (force.Length > 0)
         {
-            OutOfPlane(b, x, y, 2.5 + (4.5 * relative), f.Toward(force) > 0, cls);
+            OutOfPlane(b, x, y, 2.5 + (4.5 * relative), f.Toward(force) > 0, cls, item);
         }
     }
 
     /// <summary>A vector along the line of sight: a circle with a dot (towards the viewer) or a cross (away).</summary>
-    private static void OutOfPlane(SvgBuilder b, double x, double y, double r, bool toward, string cls)
+    private static void OutOfPlane(SvgBuilder b, double x, double y, double r, bool toward, string cls, string? item = null)
     {
-        b.Circle(x, y, r, "sym " + cls);
+        b.Circle(x, y, r, "sym " + cls, item);
         if (toward)
         {
-            b.Circle(x, y, Math.Max(0.8, r * 0.22), "head " + cls);
+            b.Circle(x, y, Math.Max(0.8, r * 0.22), "head " + cls, item);
         }
         else
         {
             double d = r * 0.7;
-            b.Path($"M{SvgBuilder.N(x - d)} {SvgBuilder.N(y - d)}L{SvgBuilder.N(x + d)} {SvgBuilder.N(y + d)}M{SvgBuilder.N(x - d)} {SvgBuilder.N(y + d)}L{SvgBuilder.N(x + d)} {SvgBuilder.N(y - d)}", "sym " + cls);
+            b.Path($"M{SvgBuilder.N(x - d)} {SvgBuilder.N(y - d)}L{SvgBuilder.N(x + d)} {SvgBuilder.N(y + d)}M{SvgBuilder.N(x - d)} {SvgBuilder.N(y + d)}L{SvgBuilder.N(x + d)} {SvgBuilder.N(y - d)}", "sym " + cls, item);
         }
     }
 
     /// <summary>A couple about the line of sight as a curved arrow (counter-clockwise for a component towards the viewer).</summary>
-    private static void CurvedArrow(SvgBuilder b, double cx, double cy, double r, bool counterClockwise, string cls)
+    private static void CurvedArrow(SvgBuilder b, double cx, double cy, double r, bool counterClockwise, string cls, string? item = null)
     {
         const double start = 200 * Math.PI / 180, sweep = 280 * Math.PI / 180;
         double end = counterClockwise ? start + sweep : start - sweep;
         (double X, double Y) P(double t) => (cx + (r * Math.Cos(t)), cy - (r * Math.Sin(t)));
         var (x0, y0) = P(start);
         var (x1, y1) = P(end);
-        b.Path($"M{SvgBuilder.N(x0)} {SvgBuilder.N(y0)}A{SvgBuilder.N(r)} {SvgBuilder.N(r)} 0 1 {(counterClockwise ? 0 : 1)} {SvgBuilder.N(x1)} {SvgBuilder.N(y1)}", "arc " + cls);
+        b.Path($"M{SvgBuilder.N(x0)} {SvgBuilder.N(y0)}A{SvgBuilder.N(r)} {SvgBuilder.N(r)} 0 1 {(counterClockwise ? 0 : 1)} {SvgBuilder.N(x1)} {SvgBuilder.N(y1)}", "arc " + cls, item);
         double tx = counterClockwise ? -Math.Sin(end) : Math.Sin(end);
         double ty = counterClockwise ? -Math.Cos(end) : Math.Cos(end);
         double h = 5;
         double bx = x1 - (tx * h), by = y1 - (ty * h);
-        b.Polygon([(x1 + (tx * 1.5), y1 + (ty * 1.5)), (bx - (ty * h * 0.5), by + (tx * h * 0.5)), (bx + (ty * h * 0.5), by - (tx * h * 0.5))], "head " + cls);
+        b.Polygon([(x1 + (tx * 1.5), y1 + (ty * 1.5)), (bx - (ty * h * 0.5), by + (tx * h * 0.5)), (bx + (ty * h * 0.5), by - (tx * h * 0.5))], "head " + cls, item: item);
     }
 
     /// <summary>A moment vector in the drawing plane as a double-headed arrow from the point.</summary>
-    private static void DoubleArrow(SvgBuilder b, double x, double y, double dx, double dy, string cls)
+    private static void DoubleArrow(SvgBuilder b, double x, double y, double dx, double dy, string cls, string? item = null)
     {
         double len = Math.Sqrt((dx * dx) + (dy * dy));
         if (len < 3)
         {
             return;
         }
-        Arrow(b, x, y, x + dx, y + dy, cls);
+        Arrow(b, x, y, x + dx, y + dy, cls, item: item);
         double ux = dx / len, uy = dy / len;
-        Arrow(b, x, y, x + dx - (ux * 5), y + dy - (uy * 5), cls);
+        Arrow(b, x, y, x + dx - (ux * 5), y + dy - (uy * 5), cls, item: item);
     }
 
     private static void ReferenceMark(SvgBuilder b, SketchFrame f, Vector3 reference)
