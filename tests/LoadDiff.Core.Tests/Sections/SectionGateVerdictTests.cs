@@ -14,7 +14,7 @@ namespace LoadDiff.Core.Tests.Sections;
 /// s = 1. |ΔM(1)| = 10 kN·m is the largest (|ΔM| = 10·s before, |10·s − 20| after, 0 beyond 2), and a 5 % gate allows
 /// 0.05 × 20 = 1 kN·m.
 /// </summary>
-public class SectionGateVerdictTests
+public partial class SectionGateVerdictTests
 {
     private const double Rel = 0.05;
 
