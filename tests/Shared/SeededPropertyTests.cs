@@ -120,7 +120,7 @@ public class SeededPropertyTests
     [Fact]
     public void TestName_isTheFileNameAndMethod_onEveryMachine()
     {
-        Assert.Equal("DoubleDoubleTests.Operations.Add", SeededProperty.TestName("/work/x/tests/DoubleDoubleTests.Operations.cs", "Add"));
+        Assert.Equal("DoubleDoubleTests.Operations.Add", SeededProperty.TestName("/srv/checkout/tests/DoubleDoubleTests.Operations.cs", "Add"));
         Assert.Equal("DoubleDoubleTests.Operations.Add", SeededProperty.TestName(@"C:\src\tests\DoubleDoubleTests.Operations.cs", "Add"));
         Assert.Equal("MutationTests.Json[a.json]", SeededProperty.TestName("tests/MutationTests.cs", "Json", "a.json"));
     }
