@@ -1,9 +1,10 @@
 using LoadDiff.Core;
 using LoadDiff.Core.Loads;
+using LoadDiff.Core.Tests.Support;
 
 namespace LoadDiff.Core.Tests;
 
-public class PolygonGeometryTests
+public partial class PolygonGeometryTests
 {
     private static Vector3 V(double x, double y, double z) => Vector3.Create(x, y, z);
 
@@ -24,5 +25,30 @@ public class PolygonGeometryTests
         Assert.False(Simple(V(0, 0, 0), V(4, 0, 0), V(0, 2, 0), V(1, 2, 0))); // edges (4,0)–(0,2) and (1,2)–(0,0) cross at (0.8, 1.6)
         Assert.False(Simple(V(0, 0, 0), V(4, 0, 0), V(4, 4, 0), V(2, 0, 0), V(0, 4, 0))); // a vertex on another edge
         Assert.False(Simple(V(0, 0, 0), V(4, 0, 0), V(2, 0, 0), V(2, 3, 0))); // an edge folding back along the previous one
+    }
+
+    [Fact]
+    public void Analyse_area_vector_size_and_out_of_plane_distance_of_a_warped_pentagon()
+    {
+        // Hand computation in exact fractions, relative to the first vertex o = (1, 1, 1): the edge vectors are
+        // d = (0,0,0), (2,0,0), (2,2,0), (1,3,1), (0,2,0); the fan ½Σ d_i × d_(i+1) = ½[(0,0,4) + (2,−2,4) + (−2,0,2)]
+        // = ½(0, −2, 10) = (0, −1, 5). Size = max |d| = √11 (the fourth vertex).
+        // Mean of d = (1, 7/5, 1/5); (d − mean)·A = 2/5, 2/5, −8/5, 12/5, −8/5, so the largest distance from the
+        // mean plane is (12/5)/|A| = (12/5)/√26, at the fourth vertex.
+        PolygonGeometry g = PolygonGeometry.Analyse([V(1, 1, 1), V(3, 1, 1), V(3, 3, 1), V(2, 4, 2), V(1, 3, 1)]);
+        Assert.Equal(V(0, -1, 5), g.AreaVector);
+        Close.Relative(Math.Sqrt(26), g.Area, 1e-15);
+        Close.Relative(Math.Sqrt(11), g.Size, 1e-15);
+        Close.Relative(2.4 / Math.Sqrt(26), g.OutOfPlane, 1e-14);
+    }
+
+    [Fact]
+    public void Analyse_refuses_fewer_than_three_vertices_and_null()
+    {
+        ArgumentException e = Assert.Throws<ArgumentException>(() => PolygonGeometry.Analyse([V(0, 0, 0), V(1, 0, 0)]));
+        Assert.StartsWith("A polygon needs at least three vertices.", e.Message, StringComparison.Ordinal);
+        Assert.Throws<ArgumentNullException>(() => PolygonGeometry.Analyse(null!));
+        Assert.Throws<ArgumentNullException>(() => PolygonGeometry.IsSimple(null!, V(0, 0, 1)));
+        Assert.Throws<ArgumentException>(() => PolygonGeometry.IsSimple([V(0, 0, 0), V(1, 0, 0)], V(0, 0, 1)));
     }
 }
