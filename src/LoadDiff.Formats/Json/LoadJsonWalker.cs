@@ -170,19 +170,21 @@ internal sealed class LoadJsonWalker
         Expect(loads, JsonKind.Array, cpath + ".loads", "'loads' must be an array of load items");
         sink.BeginCase(c.Key, title);
         var ids = new HashSet<string>(StringComparer.Ordinal);
+        var nextSuffix = new Dictionary<string, int>(StringComparer.Ordinal);
         int couples = 0;
         // A streamed file keeps no items in the tree: they arrive one at a time, in file order.
         IEnumerable<JsonNode> items = loads.Streamed ? _streamedLoads!(c.Key) : loads.Elements!;
         int i = 0;
         foreach (JsonNode element in items)
         {
-            WalkItem(element, i, $"{cpath}.loads[{i}]", ids, ref couples, sink);
+            WalkItem(element, i, $"{cpath}.loads[{i}]", ids, nextSuffix, ref couples, sink);
             i++;
         }
         sink.EndCase();
     }
 
-    private void WalkItem(JsonNode item, int index, string path, HashSet<string> ids, ref int couples, ILoadSink sink)
+    private void WalkItem(JsonNode item, int index, string path, HashSet<string> ids, Dictionary<string, int> nextSuffix,
+        ref int couples, ILoadSink sink)
     {
         Expect(item, JsonKind.Object, path, "a load item must be an object with a 'kind'");
         JsonNode kindNode = item["kind"] ?? throw Error(item, path, Codes.MissingField,
@@ -205,10 +207,18 @@ internal sealed class LoadJsonWalker
         string Derive(string basis)
         {
             string d = "~" + basis;
-            for (int n = 2; !ids.Add(d); n++)
+            if (ids.Add(d))
             {
-                d = "~" + basis + "#" + n.ToString(CultureInfo.InvariantCulture);
+                return d;
             }
+            // Numbers below the one remembered for this basis are taken (ids are never released), so the search
+            // starts there: many id-less items at one place cost linear, not quadratic, time.
+            int n = nextSuffix.GetValueOrDefault(basis, 2);
+            while (!ids.Add(d = "~" + basis + "#" + n.ToString(CultureInfo.InvariantCulture)))
+            {
+                n++;
+            }
+            nextSuffix[basis] = n + 1;
             return d;
         }
         string Begin(string basis)

@@ -70,6 +70,25 @@ public class DocumentDifferTests
     }
 
     [Fact]
+    public void Id_less_items_at_one_place_are_numbered_in_file_order()
+    {
+        // Five id-less forces at one point are ~force@…, then #2 … #5 in file order (README, "ids"); changing the
+        // fourth changes exactly the item numbered #4. The numbering stays in order when an explicit id sits
+        // between them.
+        static string Doc(string fourth) =>
+            """{ "cases": { "d": { "loads": [ { "kind": "force", "at": [1, 2, 3], "value": [0, 0, -1] },"""
+            + """{ "kind": "force", "at": [1, 2, 3], "value": [0, 0, -2] },"""
+            + """{ "id": "named", "kind": "force", "at": [1, 2, 3], "value": [0, 0, -9] },"""
+            + """{ "kind": "force", "at": [1, 2, 3], "value": [0, 0, -3] },"""
+            + """{ "kind": "force", "at": [1, 2, 3], "value": [0, 0, """ + fourth + """] },"""
+            + """{ "kind": "force", "at": [1, 2, 3], "value": [0, 0, -5] } ] } } }""";
+        ItemChange c = Assert.Single(Diff(Doc("-4"), Doc("-40")).Items);
+        Assert.True(c.DerivedId);
+        Assert.StartsWith("~force@", c.Id, StringComparison.Ordinal);
+        Assert.EndsWith("#4", c.Id, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void Items_without_id_are_matched_by_a_derived_key_and_marked()
     {
         const string a = """{ "cases": { "d": { "loads": [ { "kind": "force", "at": [1, 2, 3], "value": [0, 0, -1] } ] } } }""";
