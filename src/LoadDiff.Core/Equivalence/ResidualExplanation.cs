@@ -69,13 +69,15 @@ public sealed record ResidualExplanation(
             }
             // ΔM about the point of the original's resultant line nearest the box centre: the substitute's line lies at s
             // from it with ΔM⊥ = s × R, so s = R × ΔM / |R|²; the part of ΔM along R is a couple no shift can make.
+            // Through the unit direction u = R/|R|, not |R|², which underflows to 0 for a tiny but nonzero R.
             ForceCoupleSystem originalAtCentre = o.Sums.At(centre);
-            Vector3 onLine = centre + (Vector3.Cross(r, originalAtCentre.Moment) / r.LengthSquared);
+            double rn = r.Length;
+            Vector3 u = r / rn;
+            Vector3 onLine = centre + (Vector3.Cross(u, originalAtCentre.Moment) / rn);
             ForceCoupleSystem d = ResultantSums.Difference(o.Sums, s.Sums, onLine);
-            double r2 = r.LengthSquared;
-            Vector3 shift = Vector3.Cross(r, d.Moment) / r2;
-            Vector3 along = r * (Vector3.Dot(r, d.Moment) / r2);
-            return new ResidualExplanation(ResidualReading.MisplacedResultant, -d.Force, -along, onLine, shift, r / r.Length, null, suspects, searchBounded);
+            Vector3 shift = Vector3.Cross(u, d.Moment) / rn;
+            Vector3 along = u * Vector3.Dot(u, d.Moment);
+            return new ResidualExplanation(ResidualReading.MisplacedResultant, -d.Force, -along, onLine, shift, u, null, suspects, searchBounded);
         }
         WrenchAnalysis w = res.Wrench;
         if (w.AxisPoint is { } axisPoint && w.AxisDirection is { } direction)

@@ -45,7 +45,8 @@ public abstract record LoadItem(string Id)
 
     internal static bool Parallel(Vector3 v, Vector3 unit, double rel)
     {
-        double n2 = v.LengthSquared;
-        return n2 == 0 || Vector3.Cross(v, unit).LengthSquared <= rel * rel * n2;
+        // Compared as lengths, not squares: squares of a tiny force underflow to 0 and would call any direction parallel.
+        double n = v.Length;
+        return n == 0 || Vector3.Cross(v, unit).Length <= rel * n;
     }
 }

@@ -36,13 +36,14 @@ public sealed record WrenchAnalysis(
             return new WrenchAnalysis(nullSystem ? SystemKind.Null : SystemKind.Couple, null, null, null,
                 m, [], null);
         }
-        double r2 = r.LengthSquared;
-        double rm = Vector3.Dot(r, m);
-        double pitch = rm / r2;
-        Vector3 axisPoint = p + (Vector3.Cross(r, m) / r2);
+        // Through the unit direction rather than |R|²: |R|² underflows to 0 below about 1e-162 (and overflows above
+        // 1e154) although R itself is representable, so R·M/|R|² would divide by zero for a tiny nonzero resultant.
         Vector3 direction = r / rn;
-        Vector3 minimum = r * pitch;
-        bool single = Math.Abs(rm) / rn <= momentZero;
+        double um = Vector3.Dot(direction, m);
+        double pitch = um / rn;
+        Vector3 axisPoint = p + (Vector3.Cross(direction, m) / rn);
+        Vector3 minimum = direction * um;
+        bool single = Math.Abs(um) <= momentZero;
         var crossings = new List<PlaneCrossing>();
         PlaneCrossing? centre = null;
         if (single)
