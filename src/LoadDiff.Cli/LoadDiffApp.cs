@@ -57,10 +57,12 @@ public static class LoadDiffApp
             error.WriteLine("loaddiff: " + e.Message);
             return ExitCodes.InputError;
         }
-        catch (OverflowException)
+        catch (OverflowException e)
         {
-            // Inputs are limited to 1e100, but products of them (moments, the wrench axis) can still pass the range of double.
-            error.WriteLine("loaddiff: a result overflowed the range of double: the loads or coordinates are too large for the units used; choose units that bring the numbers nearer to 1");
+            // Inputs are limited to 1e100, but products of them (moments, factored combinations, tolerances) can still
+            // pass the range of double; Core's message names the case or combination where it knows it.
+            string where = e.Message.StartsWith("the ", StringComparison.Ordinal) ? e.Message + ": " : "a result overflowed the range of double: ";
+            error.WriteLine($"loaddiff: error {LoadDiff.Formats.Diagnostics.Codes.OutOfRange}: {where}the loads or coordinates are too large for the units used; choose units that bring the numbers nearer to 1");
             return ExitCodes.InputError;
         }
         catch (IOException e)

@@ -199,7 +199,7 @@ public readonly struct Vector3 : IEquatable<Vector3>, IFormattable
         return dop + err;
     }
 
-    private static Vector3 Checked(double x, double y, double z)
+    internal static Vector3 Checked(double x, double y, double z)
     {
         if (!double.IsFinite(x) || !double.IsFinite(y) || !double.IsFinite(z))
         {

@@ -67,5 +67,6 @@ internal sealed class VectorSum
         _z = _z + (dx * f._y) - (dy * f._x);
     }
 
-    public Vector3 Value => Vector3.Create(_x.Value, _y.Value, _z.Value);
+    // Every term is finite (inputs are checked), so a sum that is not has overflowed.
+    public Vector3 Value => Vector3.Checked(_x.Value, _y.Value, _z.Value);
 }

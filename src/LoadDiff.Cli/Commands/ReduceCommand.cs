@@ -78,11 +78,29 @@ public static class ReduceCommand
         var entries = new List<ReducedEntry>();
         foreach (string name in loaded.Sink.CaseNames.Where(Wanted))
         {
-            entries.Add(new ReducedEntry(name, EntryKind.Case, loaded.Sink.CaseTitle(name), loaded.Sink.Cases[name].ResultAt(point), null));
+            LoadReduction result;
+            try
+            {
+                result = loaded.Sink.Cases[name].ResultAt(point);
+            }
+            catch (OverflowException)
+            {
+                throw new OverflowException($"the case '{name}' of {loaded.Path} overflowed the range of double when its loads were summed");
+            }
+            entries.Add(new ReducedEntry(name, EntryKind.Case, loaded.Sink.CaseTitle(name), result, null));
         }
         foreach (LoadCombination c in loaded.Sink.Combinations.Where(c => Wanted(c.Name)))
         {
-            entries.Add(new ReducedEntry(c.Name, EntryKind.Combination, null, loaded.Combine(c).ResultAt(point), c));
+            LoadReduction result;
+            try
+            {
+                result = loaded.Combine(c).ResultAt(point);
+            }
+            catch (OverflowException)
+            {
+                throw new OverflowException($"the combination '{c.Name}' of {loaded.Path} (at $.combinations) overflowed the range of double when its factors were applied");
+            }
+            entries.Add(new ReducedEntry(c.Name, EntryKind.Combination, null, result, c));
         }
         return new ReduceResult(loaded.Path, loaded.Header.Title, loaded.Units, point, description, entries);
     }

@@ -47,6 +47,11 @@ public static class EquivalenceChecker
         double gm = original.GrossCouple + (gf * diagonal);
         (double allowF, AllowanceSource byF) = AppliedTolerance.Govern(tolerance.Force, tolerance.Relative * gf, noise.Force);
         (double allowM, AllowanceSource byM) = AppliedTolerance.Govern(tolerance.Moment, tolerance.Relative * gm, noise.Moment);
+        if (!double.IsFinite(allowF) || !double.IsFinite(allowM))
+        {
+            // An infinite allowance would pass any substitute: the check cannot be made in these units.
+            throw new OverflowException($"the tolerance of '{name}' overflowed the range of double (G_F = {Text(gf)}, G_M = Σ|C| + G_F·D = {Text(gm)})");
+        }
         var applied = new AppliedTolerance(allowF, allowM, byF, byM, gf, gm, diagonal, tolerance.Length is not null, noise);
 
         // The residual's own wrench is analysed about the box centre, near the loads, whatever the reference point.
@@ -57,6 +62,8 @@ public static class EquivalenceChecker
         bool pass = analysis.ForceNorm <= applied.Force && worst <= applied.Moment;
         return new CaseComparison(name, kind, original, substitute, analysis, applied, OnlyIn.Both, pass, notes ?? []);
     }
+
+    private static string Text(double x) => x.ToString("R", System.Globalization.CultureInfo.InvariantCulture);
 
     /// <summary>A case found in one file only: reported, and it fails.</summary>
     public static CaseComparison Missing(string name, EntryKind kind, LoadReduction? original, LoadReduction? substitute, IReadOnlyList<string>? notes = null)
