@@ -24,7 +24,7 @@ public static class CheckJUnitWriter
         x.WriteAttributeString("failures", failures);
         x.WriteAttributeString("errors", "0");
         x.WriteStartElement("testsuite");
-        x.WriteAttributeString("name", $"{result.SubstitutePath} against {result.OriginalPath}");
+        x.WriteAttributeString("name", SafeText.Xml($"{result.SubstitutePath} against {result.OriginalPath}"));
         x.WriteAttributeString("tests", tests);
         x.WriteAttributeString("failures", failures);
         x.WriteAttributeString("errors", "0");
@@ -33,18 +33,18 @@ public static class CheckJUnitWriter
         {
             x.WriteStartElement("testcase");
             x.WriteAttributeString("classname", c.Kind == EntryKind.Case ? "loaddiff.check.case" : "loaddiff.check.combination");
-            x.WriteAttributeString("name", c.Name);
+            x.WriteAttributeString("name", SafeText.Xml(c.Name));
             if (!c.Equivalent)
             {
                 x.WriteStartElement("failure");
-                x.WriteAttributeString("message", CheckWords.FailureReason(c, result));
+                x.WriteAttributeString("message", SafeText.Xml(CheckWords.FailureReason(c, result)));
                 x.WriteAttributeString("type", c.Presence == OnlyIn.Both ? "not-equivalent" : "missing");
-                x.WriteString(string.Join("\n", [CheckWords.FailureReason(c, result), .. CheckWords.Explanation(c, result)]));
+                x.WriteString(Lines([CheckWords.FailureReason(c, result), .. CheckWords.Explanation(c, result)]));
                 x.WriteEndElement();
             }
             else if (c.Notes.Count > 0)
             {
-                x.WriteElementString("system-out", "note: " + string.Join("; ", c.Notes));
+                x.WriteElementString("system-out", SafeText.Xml("note: " + string.Join("; ", c.Notes)));
             }
             x.WriteEndElement();
         }
@@ -52,20 +52,20 @@ public static class CheckJUnitWriter
         {
             x.WriteStartElement("testcase");
             x.WriteAttributeString("classname", "loaddiff.check.section-gate");
-            x.WriteAttributeString("name", g.Name);
+            x.WriteAttributeString("name", SafeText.Xml(g.Name));
             if (!g.Passes)
             {
                 x.WriteStartElement("failure");
-                x.WriteAttributeString("message", CheckWords.GateCase(g, result).Trim());
+                x.WriteAttributeString("message", SafeText.Xml(CheckWords.GateCase(g, result).Trim()));
                 x.WriteAttributeString("type", "section-gate");
-                x.WriteString(CheckWords.GateCase(g, result).Trim());
+                x.WriteString(Lines(CheckWords.GateCase(g, result).Trim().Split('\n')));
                 x.WriteEndElement();
             }
             x.WriteEndElement();
         }
         if (result.Warnings.Count > 0)
         {
-            x.WriteElementString("system-err", string.Join("\n", result.Warnings.Select(v => "warning: " + v)));
+            x.WriteElementString("system-err", Lines(result.Warnings.Select(v => "warning: " + v)));
         }
         x.WriteEndElement();
         x.WriteEndElement();
@@ -73,4 +73,7 @@ public static class CheckJUnitWriter
         x.Flush();
         output.WriteLine();
     }
+
+    // Each line made safe on its own, so the writer's own line breaks stay and no forbidden character reaches XmlWriter (which throws on them).
+    private static string Lines(IEnumerable<string> lines) => string.Join("\n", lines.Select(SafeText.Xml));
 }

@@ -17,7 +17,7 @@ public static class CheckMarkdownRenderer
         string verdict = result.Equivalent ? "✅ equivalent" : "❌ " + CheckWords.Overall(result);
         w.WriteLine($"### Static equivalence: {Esc(verdict)}");
         w.WriteLine();
-        w.WriteLine($"`{Esc(result.SubstitutePath)}` checked against `{Esc(result.OriginalPath)}`. Units {f}, {l}; moments in {m} about "
+        w.WriteLine($"{Esc(result.SubstitutePath)} checked against {Esc(result.OriginalPath)}. Units {f}, {l}; moments in {m} about "
             + $"{NumberText.Readable(result.ReferencePoint)} {l} ({Esc(result.ReferenceDescription)}).");
         w.WriteLine();
         w.WriteLine($"Tolerance: {Esc(CheckWords.Rule(result))}.");

@@ -13,8 +13,8 @@ public static class CheckTextRenderer
         ArgumentNullException.ThrowIfNull(w);
         string f = result.Units.Force.Symbol, l = result.Units.Length.Symbol, m = result.Units.MomentSymbol;
         w.WriteLine("Static equivalence check");
-        w.WriteLine($"  original:    {result.OriginalPath}");
-        w.WriteLine($"  substitute:  {result.SubstitutePath}");
+        w.WriteLine($"  original:    {SafeText.Visible(result.OriginalPath)}");
+        w.WriteLine($"  substitute:  {SafeText.Visible(result.SubstitutePath)}");
         w.WriteLine($"  units:       force {f}, length {l}, moment {m}");
         w.WriteLine($"  moments about {NumberText.Readable(result.ReferencePoint)} {l} ({result.ReferenceDescription})");
         w.WriteLine($"  tolerance:   {CheckWords.Rule(result)}");
@@ -23,7 +23,7 @@ public static class CheckTextRenderer
             w.WriteLine($"  warning:     {warning}");
         }
         w.WriteLine();
-        int nameWidth = Math.Max(4, result.Comparisons.Max(c => c.Name.Length));
+        int nameWidth = Math.Max(4, result.Comparisons.Max(c => SafeText.Visible(c.Name).Length));
         string header = $"  {"name".PadRight(nameWidth)}  {"kind",-11}  {"verdict",-24}  {"|ΔR|",-11}  {"allowed",-11}  {"worst |ΔM|",-11}  {"allowed",-11}  governs (F/M)";
         w.WriteLine(header);
         w.WriteLine("  " + new string('-', header.Length - 2));
@@ -36,22 +36,22 @@ public static class CheckTextRenderer
                 am = NumberText.Readable(t.Moment);
                 gov = CheckWords.Governs(t);
             }
-            w.WriteLine($"  {c.Name.PadRight(nameWidth)}  {CheckWords.Kind(c),-11}  {CheckWords.Verdict(c),-24}  {CheckWords.ForceNorm(c),-11}  {af,-11}  {CheckWords.WorstMoment(c),-11}  {am,-11}  {gov}".TrimEnd());
+            w.WriteLine($"  {SafeText.Visible(c.Name).PadRight(nameWidth)}  {CheckWords.Kind(c),-11}  {CheckWords.Verdict(c),-24}  {CheckWords.ForceNorm(c),-11}  {af,-11}  {CheckWords.WorstMoment(c),-11}  {am,-11}  {gov}".TrimEnd());
         }
         w.WriteLine($"  (|ΔR| in {f}; |ΔM| in {m}, the largest over the corners of the box; 0 = within rounding noise)");
         foreach (CaseComparison c in result.Comparisons.Where(c => c.Equivalent && c.Notes.Count > 0))
         {
             w.WriteLine();
-            w.WriteLine($"{(c.Kind == LoadDiff.Core.Model.EntryKind.Case ? "Case" : "Combination")} \"{c.Name}\": PASS, with note{(c.Notes.Count > 1 ? "s" : "")}:");
+            w.WriteLine($"{(c.Kind == LoadDiff.Core.Model.EntryKind.Case ? "Case" : "Combination")} \"{SafeText.Visible(c.Name)}\": PASS, with note{(c.Notes.Count > 1 ? "s" : "")}:");
             foreach (string note in c.Notes)
             {
-                w.WriteLine($"  note: {note}");
+                w.WriteLine($"  note: {SafeText.Visible(note)}");
             }
         }
         foreach (CaseComparison c in result.Comparisons.Where(c => !c.Equivalent))
         {
             w.WriteLine();
-            w.WriteLine($"{(c.Kind == LoadDiff.Core.Model.EntryKind.Case ? "Case" : "Combination")} \"{c.Name}\": {CheckWords.Verdict(c)}");
+            w.WriteLine($"{(c.Kind == LoadDiff.Core.Model.EntryKind.Case ? "Case" : "Combination")} \"{SafeText.Visible(c.Name)}\": {CheckWords.Verdict(c)}");
             w.WriteLine($"  {CheckWords.FailureReason(c, result)}");
             if (c.Original is { } o)
             {

@@ -13,7 +13,7 @@ public static class DiffMarkdownRenderer
         string f = d.Units.Force.Symbol, m = d.Units.MomentSymbol;
         w.WriteLine($"### Load description diff: {(d.HasDifferences ? "changes found" : "no differences")}");
         w.WriteLine();
-        w.WriteLine($"`{Esc(d.OldName)}` → `{Esc(d.NewName)}`. Units {f}, {d.Units.Length.Symbol}, {d.Units.Mass.Symbol}; contributions and resultants about {Esc(DiffWords.Point(d))}.");
+        w.WriteLine($"{Esc(d.OldName)} → {Esc(d.NewName)}. Units {f}, {d.Units.Length.Symbol}, {d.Units.Mass.Symbol}; contributions and resultants about {Esc(DiffWords.Point(d))}.");
         foreach (string note in d.Notes)
         {
             w.WriteLine();
@@ -91,7 +91,7 @@ public static class DiffMarkdownRenderer
         w.WriteLine("_" + Esc(DiffWords.Caution) + "_");
     }
 
-    private static string Code(string? s, string unit) => s is null ? "—" : "`" + s.Replace("`", "'", StringComparison.Ordinal).Replace("|", "\\|", StringComparison.Ordinal) + "`" + Esc(unit);
+    private static string Code(string? s, string unit) => s is null ? "—" : "`" + SafeText.Visible(s).Replace("`", "'", StringComparison.Ordinal).Replace("|", "\\|", StringComparison.Ordinal) + "`" + Esc(unit);
 
     private static string Esc(string s) => ReduceMarkdownRenderer.Escape(s);
 }

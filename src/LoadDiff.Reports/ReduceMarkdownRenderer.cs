@@ -15,7 +15,7 @@ public static class ReduceMarkdownRenderer
         ArgumentNullException.ThrowIfNull(result);
         ArgumentNullException.ThrowIfNull(w);
         string f = result.Units.Force.Symbol, l = result.Units.Length.Symbol, m = result.Units.MomentSymbol;
-        w.WriteLine($"### Reduction of `{Escape(result.Source)}`");
+        w.WriteLine($"### Reduction of {Escape(result.Source)}");
         w.WriteLine();
         if (result.Title is { } t)
         {
@@ -42,5 +42,6 @@ public static class ReduceMarkdownRenderer
         w.WriteLine("> " + Caution.Text);
     }
 
-    internal static string Escape(string s) => s.Replace("|", "\\|", StringComparison.Ordinal);
+    // Names, titles and paths are data: no HTML, Markdown syntax or line break may come from them.
+    internal static string Escape(string s) => SafeText.Markdown(s);
 }

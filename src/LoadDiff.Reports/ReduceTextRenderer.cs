@@ -13,10 +13,10 @@ public static class ReduceTextRenderer
         ArgumentNullException.ThrowIfNull(result);
         ArgumentNullException.ThrowIfNull(w);
         string f = result.Units.Force.Symbol, l = result.Units.Length.Symbol, m = result.Units.MomentSymbol;
-        w.WriteLine($"Reduction of {result.Source}");
+        w.WriteLine($"Reduction of {SafeText.Visible(result.Source)}");
         if (result.Title is { } t)
         {
-            w.WriteLine($"Title:            {t}");
+            w.WriteLine($"Title:            {SafeText.Visible(t)}");
         }
         w.WriteLine($"Units:            force {f}, length {l}, moment {m}");
         w.WriteLine($"Reference point:  {NumberText.Readable(result.ReferencePoint)} {l} ({result.ReferenceDescription})");
@@ -25,10 +25,10 @@ public static class ReduceTextRenderer
         {
             w.WriteLine();
             LoadReduction r = e.Reduction;
-            string head = e.Kind == EntryKind.Case ? $"Case \"{e.Name}\"" : $"Combination \"{e.Name}\" = {Describe.Factors(e.Combination!)}";
+            string head = e.Kind == EntryKind.Case ? $"Case \"{SafeText.Visible(e.Name)}\"" : $"Combination \"{SafeText.Visible(e.Name)}\" = {Describe.Factors(e.Combination!)}";
             if (e.Title is { } title)
             {
-                head += " — " + title;
+                head += " — " + SafeText.Visible(title);
             }
             w.WriteLine(head + $" ({r.ItemCount.ToString(CultureInfo.InvariantCulture)} item{(r.ItemCount == 1 ? "" : "s")})");
             double fn = WrenchAnalysis.RoundingThreshold * r.GrossForce;

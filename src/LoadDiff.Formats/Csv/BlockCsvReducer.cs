@@ -101,6 +101,10 @@ internal sealed class BlockCsvReducer
             var largest = new List<Contributor>(r.Largest.Count);
             foreach (LargestRow row in r.Largest)
             {
+                if (row.Id is { } kept && LoadDiff.Core.Text.NameCharacters.FirstForbidden(kept) is int bad and >= 0)
+                {
+                    throw Fail(Codes.InvalidId, LoadDiff.Core.Text.NameCharacters.Describe("an id", kept, bad), nextLine + row.Line - 1, 1);
+                }
                 string id = row.Id ?? "row" + (nextLine + row.Line - 1).ToString(System.Globalization.CultureInfo.InvariantCulture);
                 largest.Add(new Contributor(idPrefix.Length > 0 ? idPrefix + "/" + id : id, LoadKind.Force, row.Force, Vector3.Zero, row.At, 1));
             }

@@ -107,7 +107,7 @@ internal sealed class CsvLoadReader
             int cp = vertices.RequiredColumn("p", CsvLayouts.Vertices);
             while (vertices.ReadRow())
             {
-                string vid = vertices.Text(ci);
+                string vid = vertices.Name(ci, "a vertex id");
                 Vector3 x = Point(vertices, cx, cy, cz);
                 if (!table.TryAdd(vid, (x, vertices.Number(cp) * _units.Pressure)))
                 {
@@ -162,7 +162,7 @@ internal sealed class CsvLoadReader
         }
         while (csv.ReadRow())
         {
-            string id = ci >= 0 ? csv.Text(ci) : "row" + csv.Line.ToString(System.Globalization.CultureInfo.InvariantCulture);
+            string id = ci >= 0 ? csv.Name(ci, "an id") : "row" + csv.Line.ToString(System.Globalization.CultureInfo.InvariantCulture);
             if (idPrefix.Length > 0)
             {
                 id = idPrefix + "/" + id;

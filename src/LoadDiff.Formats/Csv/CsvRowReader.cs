@@ -140,6 +140,14 @@ internal sealed class CsvRowReader : IDisposable
         return DecimalFastPath.TryParse(ascii, out value);
     }
 
+    /// <summary>The text of a name column, refused (LD033) when it holds a control, line-separator or bidi character.</summary>
+    public string Name(int column, string what)
+    {
+        string name = Text(column);
+        int bad = LoadDiff.Core.Text.NameCharacters.FirstForbidden(name);
+        return bad < 0 ? name : throw Fail(Codes.InvalidId, LoadDiff.Core.Text.NameCharacters.Describe(what, name, bad), column);
+    }
+
     public InputError Fail(string code, string message, int? column) =>
         new(new Diagnostic(code, Severity.Error, message, Line == 0
             ? new SourceLocation(_file) // nothing read yet: the whole file is meant

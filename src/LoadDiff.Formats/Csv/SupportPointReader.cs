@@ -1,5 +1,6 @@
 using LoadDiff.Core;
 using LoadDiff.Core.Distribution;
+using LoadDiff.Core.Text;
 using LoadDiff.Formats.Diagnostics;
 
 namespace LoadDiff.Formats.Csv;
@@ -44,6 +45,10 @@ public static class SupportPointReader
                 if (name.Length == 0)
                 {
                     throw csv.Fail(Codes.InvalidId, "a support point needs an id", id);
+                }
+                if (NameCharacters.FirstForbidden(name) is int bad and >= 0)
+                {
+                    throw csv.Fail(Codes.InvalidId, NameCharacters.Describe("a support point id", name, bad), id);
                 }
                 if (!seen.Add(name))
                 {

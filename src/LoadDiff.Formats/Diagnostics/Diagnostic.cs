@@ -15,10 +15,10 @@ public sealed record Diagnostic(string Code, Severity Severity, string Message, 
         return $"{OneLine(Location.ToString())}: {kind} {Code}: {OneLine(Message)}{path}";
     }
 
-    // Keys and values quoted from a file may hold control characters; a diagnostic stays one line.
+    // Keys and values quoted from a file may hold control, line-separator or bidi characters; a diagnostic stays one line, in visible order.
     private static string OneLine(string s)
     {
-        if (!s.Any(char.IsControl))
+        if (!s.Any(LoadDiff.Core.Text.NameCharacters.IsForbidden))
         {
             return s;
         }
@@ -30,7 +30,7 @@ public sealed record Diagnostic(string Code, Severity Severity, string Message, 
                 '\n' => b.Append("\\n"),
                 '\r' => b.Append("\\r"),
                 '\t' => b.Append("\\t"),
-                _ when char.IsControl(c) => b.Append("\\u").Append(((int)c).ToString("x4", System.Globalization.CultureInfo.InvariantCulture)),
+                _ when LoadDiff.Core.Text.NameCharacters.IsForbidden(c) => b.Append("\\u").Append(((int)c).ToString("x4", System.Globalization.CultureInfo.InvariantCulture)),
                 _ => b.Append(c),
             };
         }

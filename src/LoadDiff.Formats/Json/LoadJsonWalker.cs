@@ -4,6 +4,7 @@ using LoadDiff.Core;
 using LoadDiff.Core.Loads;
 using LoadDiff.Core.Model;
 using LoadDiff.Core.Reduction;
+using LoadDiff.Core.Text;
 using LoadDiff.Core.Units;
 using LoadDiff.Formats.Csv;
 using LoadDiff.Formats.Diagnostics;
@@ -74,6 +75,7 @@ internal sealed class LoadJsonWalker
             Expect(points, JsonKind.Object, "$.points", "'points' must be an object of named coordinates");
             foreach (JsonMember m in points.Members!)
             {
+                CheckName(m.Value, Path("$.points", m.Key), m.Key, "a point name");
                 _points[m.Key] = Vec(m.Value, Path("$.points", m.Key)) * _units.Length;
             }
         }
@@ -138,6 +140,7 @@ internal sealed class LoadJsonWalker
         foreach (JsonMember m in node.Members!)
         {
             string cpath = Path("$.combinations", m.Key);
+            CheckName(m.Value, cpath, m.Key, "a combination name");
             Expect(m.Value, JsonKind.Object, cpath, "a combination must be an object of case names and load factors");
             if (cases[m.Key] is not null)
             {
@@ -147,6 +150,7 @@ internal sealed class LoadJsonWalker
             foreach (JsonMember f in m.Value.Members!)
             {
                 string fpath = Path(cpath, f.Key);
+                CheckName(f.Value, fpath, f.Key, "a case name");
                 if (cases[f.Key] is null)
                 {
                     throw Error(f.Value, fpath, Codes.UnknownCase,
@@ -162,6 +166,7 @@ internal sealed class LoadJsonWalker
     private void WalkCase(JsonMember c, ILoadSink sink)
     {
         string cpath = Path("$.cases", c.Key);
+        CheckName(c.Value, cpath, c.Key, "a case name");
         Expect(c.Value, JsonKind.Object, cpath, "a load case must be an object with a 'loads' array");
         CheckKeys(c.Value, cpath, CaseKeys);
         string? title = c.Value["title"] is { } t ? String(t, cpath + ".title") : null;
@@ -199,6 +204,7 @@ internal sealed class LoadJsonWalker
             {
                 throw Error(idNode, path + ".id", Codes.InvalidId, "an id must be non-empty and must not start with '~' (reserved for derived ids)");
             }
+            CheckName(idNode, path + ".id", id, "an id");
             if (!ids.Add(id))
             {
                 throw Error(idNode, path + ".id", Codes.DuplicateId, $"id '{id}' is used twice in this case");
@@ -561,6 +567,16 @@ internal sealed class LoadJsonWalker
                 }
                 _warnings.Add(d);
             }
+        }
+    }
+
+    // Names are data, never markup: a control or bidi character could forge a line or reorder text in a report.
+    private void CheckName(JsonNode node, string path, string name, string what)
+    {
+        int bad = NameCharacters.FirstForbidden(name);
+        if (bad >= 0)
+        {
+            throw Error(node, path, Codes.InvalidId, NameCharacters.Describe(what, name, bad));
         }
     }
 

@@ -13,7 +13,7 @@ public static class SectionsMarkdownRenderer
         ArgumentNullException.ThrowIfNull(w);
         string f = result.Units.Force.Symbol, l = result.Units.Length.Symbol, m = result.Units.MomentSymbol;
         SectionAxis a = result.Axis;
-        w.WriteLine($"### Section cuts: `{Esc(result.SubstitutePath)}` against `{Esc(result.OriginalPath)}`");
+        w.WriteLine($"### Section cuts: {Esc(result.SubstitutePath)} against {Esc(result.OriginalPath)}");
         w.WriteLine();
         w.WriteLine($"Axis e1 = {NumberText.Readable(a.Direction)} through {NumberText.Readable(a.Origin)} {l}; e2 = {NumberText.Readable(a.Lateral)}, e3 = {NumberText.Readable(a.Transverse)}. "
             + $"Units {f}, {m}. {Esc(SectionsResult.Convention)}");

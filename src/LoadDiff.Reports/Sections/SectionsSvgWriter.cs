@@ -132,5 +132,5 @@ public static class SectionsSvgWriter
 
     private static string F(double v) => v.ToString("0.##", CultureInfo.InvariantCulture);
 
-    private static string Esc(string s) => SecurityElement.Escape(s);
+    private static string Esc(string s) => SecurityElement.Escape(SafeText.Xml(s));
 }
