@@ -59,12 +59,7 @@ internal sealed class BlockCsvReducer
     /// <param name="countItems">Adds a number of items to the file's count and returns the total.</param>
     public void Reduce(string path, IReducedBlockSink sink, string? expected, string pointPrefix, string meshId, Vector3? direction, Func<long, long> countItems)
     {
-        var info = new FileInfo(path);
-        if (info.Length > _options.MaxCsvBytes)
-        {
-            throw new InputError(new Diagnostic(Codes.FileTooLarge, Severity.Error,
-                $"file is {info.Length} bytes, more than the limit of {_options.MaxCsvBytes}", new SourceLocation(_display)));
-        }
+        CsvFileGate.Check(path, _display, _options);
         try
         {
             ReduceFile(path, sink, expected, pointPrefix, meshId, direction, countItems);

@@ -29,16 +29,7 @@ internal sealed class CsvLoadReader
 
     public static CsvRowReader Open(string path, string display, ReadOptions options)
     {
-        var info = new FileInfo(path);
-        if (!info.Exists)
-        {
-            throw new InputError(new Diagnostic(Codes.ReferencedFileMissing, Severity.Error, "file not found", new SourceLocation(display)));
-        }
-        if (info.Length > options.MaxCsvBytes)
-        {
-            throw new InputError(new Diagnostic(Codes.FileTooLarge, Severity.Error,
-                $"file is {info.Length} bytes, more than the limit of {options.MaxCsvBytes}", new SourceLocation(display)));
-        }
+        CsvFileGate.Check(path, display, options);
         try
         {
             Stream stream = new FileStream(path, FileMode.Open, FileAccess.Read, FileShare.Read, 1 << 16, FileOptions.SequentialScan);
@@ -46,7 +37,8 @@ internal sealed class CsvLoadReader
             {
                 stream = new CountingStream(stream, progress);
             }
-            var text = new StreamReader(stream, new System.Text.UTF8Encoding(false, throwOnInvalidBytes: true), true, 1 << 16);
+            // No byte-order-mark detection: a UTF-16 file is refused as invalid UTF-8 here as in the block reducer.
+            var text = new StreamReader(stream, new System.Text.UTF8Encoding(false, throwOnInvalidBytes: true), false, 1 << 16);
             return new CsvRowReader(text, display, options.MaxLineLength, path);
         }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException)

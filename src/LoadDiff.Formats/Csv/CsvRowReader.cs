@@ -17,6 +17,9 @@ internal sealed class CsvRowReader : IDisposable
     private readonly List<int> _starts = [];
 
     private readonly string? _sourcePath;
+    private readonly char[] _buffer = new char[1 << 14];
+    private readonly System.Text.StringBuilder _line = new();
+    private int _bufferPos, _bufferEnd;
 
     public CsvRowReader(TextReader text, string file, int maxLineLength, string? sourcePath = null)
     {
@@ -240,16 +243,10 @@ internal sealed class CsvRowReader : IDisposable
     {
         while (true)
         {
-            line = _text.ReadLine();
+            line = ReadBoundedLine();
             if (line is null)
             {
                 return false;
-            }
-            Line++;
-            if (line.Length > _maxLine)
-            {
-                throw new InputError(new Diagnostic(Codes.LineTooLong, Severity.Error,
-                    $"line is {line.Length} characters long, more than the limit of {_maxLine} (raise it with --max-line-length)", new SourceLocation(_file, Line, 1)));
             }
             if (Line == 1 && line.Length > 0 && line[0] == '\uFEFF')
             {
@@ -261,6 +258,59 @@ internal sealed class CsvRowReader : IDisposable
             }
         }
     }
+
+    /// <summary>
+    /// The next line, ended by LF only (a CR before it is dropped), as the block reducer splits lines: a lone CR
+    /// is text, not a line end. A line over the limit is refused as soon as the limit is passed, so one endless
+    /// line is never held in memory.
+    /// </summary>
+    private string? ReadBoundedLine()
+    {
+        _line.Clear();
+        bool any = false;
+        while (true)
+        {
+            if (_bufferPos == _bufferEnd)
+            {
+                _bufferEnd = _text.Read(_buffer, 0, _buffer.Length);
+                _bufferPos = 0;
+                if (_bufferEnd == 0)
+                {
+                    if (!any)
+                    {
+                        return null;
+                    }
+                    Line++;
+                    return TrimCr(_line);
+                }
+            }
+            any = true;
+            int nl = Array.IndexOf(_buffer, '\n', _bufferPos, _bufferEnd - _bufferPos);
+            int end = nl < 0 ? _bufferEnd : nl;
+            _line.Append(_buffer, _bufferPos, end - _bufferPos);
+            _bufferPos = nl < 0 ? _bufferEnd : nl + 1;
+            // One more character than the limit is allowed before the end: it may be the CR of a CRLF.
+            if (_line.Length > _maxLine + 1 || (nl >= 0 && TrimmedLength(_line) > _maxLine))
+            {
+                Line++;
+                throw new InputError(new Diagnostic(Codes.LineTooLong, Severity.Error,
+                    nl >= 0
+                        ? $"line is {TrimmedLength(_line)} characters long, more than the limit of {_maxLine} (raise it with --max-line-length)"
+                        : $"line is longer than the limit of {_maxLine} characters (raise it with --max-line-length)",
+                    new SourceLocation(_file, Line, 1)));
+            }
+            if (nl >= 0)
+            {
+                Line++;
+                return TrimCr(_line);
+            }
+        }
+    }
+
+    private static int TrimmedLength(System.Text.StringBuilder sb) =>
+        sb.Length > 0 && sb[^1] == '\r' ? sb.Length - 1 : sb.Length;
+
+    private static string TrimCr(System.Text.StringBuilder sb) => sb.ToString(0, TrimmedLength(sb));
 
     private void Split(string line)
     {
