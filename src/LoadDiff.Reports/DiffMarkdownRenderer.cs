@@ -52,7 +52,7 @@ public static class DiffMarkdownRenderer
                     fields += "<br>" + Esc(DiffWords.DataHeading(data));
                     fields += string.Concat(data.Shown.Select(r => "<br>• " + Esc(DiffWords.Row(r, f, m))));
                 }
-                string id = "`" + Esc(i.Id) + "`" + (i.DerivedId ? " (derived key)" : "");
+                string id = SafeText.MarkdownCode(i.Id, inTable: true) + (i.DerivedId ? " (derived key)" : "");
                 w.WriteLine($"| {Esc(i.Case)} | {id} ({Esc(i.Kind)}) | {DiffWords.Change(i.Change)} | {fields} | {DiffWords.Vec(i.DeltaForce)} | {DiffWords.Vec(i.DeltaMoment)} |");
             }
         }
@@ -91,7 +91,7 @@ public static class DiffMarkdownRenderer
         w.WriteLine("_" + Esc(DiffWords.Caution) + "_");
     }
 
-    private static string Code(string? s, string unit) => s is null ? "—" : "`" + SafeText.Visible(s).Replace("`", "'", StringComparison.Ordinal).Replace("|", "\\|", StringComparison.Ordinal) + "`" + Esc(unit);
+    private static string Code(string? s, string unit) => s is null ? "—" : SafeText.MarkdownCode(s, inTable: true) + Esc(unit);
 
     private static string Esc(string s) => ReduceMarkdownRenderer.Escape(s);
 }

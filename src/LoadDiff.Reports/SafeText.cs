@@ -47,24 +47,75 @@ public static class SafeText
         return v.Contains('\uFFFE') || v.Contains('\uFFFF') ? v.Replace("\uFFFE", "\\uFFFE").Replace("\uFFFF", "\\uFFFF") : v;
     }
 
-    /// <summary>For Markdown: <see cref="Visible"/> (so no line break, hence no heading, can come from data), then HTML's &amp; &lt; &gt; as entities and every Markdown punctuation mark backslash-escaped, so that no tag, image, link, emphasis or table cell can be formed.</summary>
+    /// <summary>
+    /// For Markdown running text: <see cref="Visible"/> (so no line break, hence no heading, can come from data), HTML's
+    /// &amp; &lt; &gt; as entities, and the characters that open inline markup (emphasis, code, links, images, table
+    /// cells, strike-through) backslash-escaped; a block marker at the start is escaped too (a '>' there is already an
+    /// entity). Other punctuation is left alone so that generated text (|ΔM| = 10 kN·m (PASS): …) reads as it is.
+    /// </summary>
     public static string Markdown(string? s)
     {
         string v = Visible(s);
         var b = new StringBuilder(v.Length + 8);
-        foreach (char c in v)
+        int listNumber = ListNumberLength(v);
+        for (int i = 0; i < v.Length; i++)
         {
+            char c = v[i];
+            if (i == 0 && c is '#' or '+' or '-' or '=')
+            {
+                b.Append('\\');
+            }
             switch (c)
             {
                 case '&': b.Append("&amp;"); break;
                 case '<': b.Append("&lt;"); break;
                 case '>': b.Append("&gt;"); break;
-                case '\\' or '`' or '*' or '_' or '[' or ']' or '(' or ')' or '!' or '#' or '|' or '~' or '{' or '}' or '+' or '=' or ':':
+                // Markdown drops spaces at the ends of a line or cell, and four at the start make code: as an entity a space stays text.
+                case ' ' when i == 0 || i == v.Length - 1: b.Append("&#32;"); break;
+                case '\\' or '`' or '*' or '_' or '[' or ']' or '|' or '~':
                     b.Append('\\').Append(c);
                     break;
+                // "1." or "2)" at the start would open a numbered list; a backslash cannot escape a digit, so the mark is escaped.
+                case '.' or ')' when i == listNumber: b.Append('\\').Append(c); break;
                 default: b.Append(c); break;
             }
         }
         return b.ToString();
+    }
+
+    /// <summary>
+    /// For a Markdown code span (file names, ids, values): <see cref="Visible"/>, fenced by one backtick more than the
+    /// longest run inside so that no backtick in the data ends it; in a table cell a bar is written \| (GitHub's tables
+    /// split cells before code spans are read). Nothing inside a code span is markup, so nothing else is escaped.
+    /// </summary>
+    public static string MarkdownCode(string? s, bool inTable)
+    {
+        string v = Visible(s);
+        if (inTable)
+        {
+            v = v.Replace("|", "\\|", StringComparison.Ordinal);
+        }
+        int longest = 0, run = 0;
+        foreach (char c in v)
+        {
+            run = c == '`' ? run + 1 : 0;
+            longest = Math.Max(longest, run);
+        }
+        string fence = new('`', longest + 1);
+        // A space each side keeps a backtick at either end from joining the fence; Markdown strips one such space each side
+        // (CommonMark §6.1), so data starting or ending with a space gets one too.
+        string pad = v.Length > 0 && v.Trim(' ').Length > 0 && (v[0] is '`' or ' ' || v[^1] is '`' or ' ') ? " " : "";
+        return fence + pad + v + pad + fence;
+    }
+
+    // The position of the '.' or ')' after the digits a string starts with, or -1.
+    private static int ListNumberLength(string v)
+    {
+        int i = 0;
+        while (i < v.Length && char.IsAsciiDigit(v[i]))
+        {
+            i++;
+        }
+        return i > 0 && i < v.Length && v[i] is '.' or ')' ? i : -1;
     }
 }

@@ -60,7 +60,7 @@ public sealed class GitIntegrationTests : IDisposable
     {
         CliRun run = CliProcess.RunIn(_repo.Path, "diff", "HEAD~1:deck.loads.json", "HEAD:deck.loads.json", "--format", "markdown");
         Assert.True(run.ExitCode == 1, run.ToString());
-        Assert.Contains("`HEAD~1:deck.loads.json` → `HEAD:deck.loads.json`", run.Stdout);
+        Assert.Contains("HEAD\\~1:deck.loads.json → HEAD:deck.loads.json", run.Stdout); // ~ escaped: GitHub reads ~text~ as strike-through
         Assert.Contains("water-tank", run.Stdout);
         CliRun same = CliProcess.RunIn(_repo.Path, "diff", "HEAD:deck.loads.json", "deck.loads.json");
         Assert.True(same.ExitCode == 0, same.ToString());

@@ -163,17 +163,50 @@ public partial class ReduceCommandTests
     [Fact]
     public void Values_whose_products_overflow_exit_2_with_one_line_and_no_stack_trace()
     {
-        // Each number is within the accepted 1e100, but the moment of 1e100 N at 1e100 m and the wrench axis pass 1.8e308.
+        // Each number is within the accepted 1e100, but a pressure of 1e100 Pa on a square of side 1e100 m is a force of
+        // 1e300 N acting at (5e99, 5e99, 0) m: its moment about the origin, about 7e399 N·m, passes the largest double
+        // (IEEE 754 binary64, 1.797e308). (A line load of 1e100 N/m over 1e100 m stays in range: 1e200 N, 1e300 N·m.)
         using var t = new TempFolder();
         string f = t.Write("huge.loads.json", """
             { "cases": { "c": { "loads": [
-              { "id": "w", "kind": "line", "from": [0,0,0], "to": [1e100,0,0], "start": [1e100, 5e-324, 0], "end": [5e-324, 1e100, 0] } ] } } }
+              { "id": "a", "kind": "area", "polygon": [[0,0,0],[1e100,0,0],[1e100,1e100,0],[0,1e100,0]], "pressure": 1e100 } ] } } }
             """);
         CliRun run = CliProcess.RunIn(t.Path, "reduce", f);
         Assert.Equal(2, run.ExitCode);
-        Assert.Contains("overflow", Assert.Single(run.StderrLines));
+        string line = Assert.Single(run.StderrLines);
+        Assert.Contains("huge.loads.json:2:3: error LD021", line, StringComparison.Ordinal);
+        Assert.Contains("overflow", line, StringComparison.Ordinal);
+        Assert.Contains("$.cases.c.loads[0]", line, StringComparison.Ordinal);
         Assert.DoesNotContain("   at ", run.Stderr);
         Assert.Equal("", run.Stdout);
+    }
+
+    [Fact]
+    public void A_line_load_at_the_edge_of_the_range_reduces_to_hand_values_without_squaring_its_resultant()
+    {
+        // q(t) = (1e100, 5e-324, 0)(1 − t) + (5e-324, 1e100, 0) t N/m along x over L = 1e100 m. By hand (statics):
+        // R = L (q0 + q1)/2 = (5e199, 5e199, 0) N; M_z = ∫ x q_y dx = L² · 1e100 / 3 = 1e300/3 N·m; the central axis passes
+        // through R × M / |R|² = (1e100/3, −1e100/3, 0) m. |R|² (5e399) is beyond double: the axis is found through R/|R|.
+        using var t = new TempFolder();
+        string f = t.Write("edge.loads.json", """
+            { "cases": { "c": { "loads": [
+              { "id": "w", "kind": "line", "from": [0,0,0], "to": [1e100,0,0], "start": [1e100, 5e-324, 0], "end": [5e-324, 1e100, 0] } ] } } }
+            """);
+        CliRun run = CliProcess.RunIn(t.Path, "reduce", f, "--format", "json");
+        Assert.True(run.ExitCode == 0, run.ToString());
+        using JsonDocument doc = JsonDocument.Parse(run.Stdout);
+        JsonElement c = doc.RootElement.GetProperty("cases")[0];
+        double[] r = [.. c.GetProperty("force").EnumerateArray().Select(e => e.GetDouble())];
+        double[] m = [.. c.GetProperty("moment").EnumerateArray().Select(e => e.GetDouble())];
+        double[] a = [.. c.GetProperty("axis_point").EnumerateArray().Select(e => e.GetDouble())];
+        Assert.Equal([5e199, 5e199, 0], r);
+        Assert.Equal(0, m[0]);
+        Assert.Equal(0, m[1]);
+        Assert.Equal(1e300 / 3, m[2], 1e300 * 1e-15);
+        Assert.Equal("force", c.GetProperty("system").GetString());
+        Assert.Equal(1e100 / 3, a[0], 1e100 * 1e-15);
+        Assert.Equal(-1e100 / 3, a[1], 1e100 * 1e-15);
+        Assert.Equal(0, a[2]);
     }
 
     [Theory]

@@ -182,7 +182,7 @@ public partial class ReportTests
     {
         using var t = new TempFolder();
         string md = Report(t, "wall.md", 0, "reduce", TankWall);
-        Assert.StartsWith("### Reduction of `fixtures/tank-wall/detailed.loads.json`", md);
+        Assert.StartsWith("### Reduction of fixtures/tank-wall/detailed.loads.json", md);
         Assert.Contains("(470.88, 0, 0)", md);
     }
 
