@@ -25,10 +25,10 @@ public static class LoadFileReader
         {
             if (path == "-")
             {
-                using Stream stdin = Console.OpenStandardInput();
-                byte[] bytes = ReadAllBounded(stdin, options.MaxJsonBytes, "-");
+                byte[] bytes = StandardInput(options);
                 return ReadJsonBytes(bytes, "-", Directory.GetCurrentDirectory(), sink, options, warnings);
             }
+            RequireRegular(path, path);
             if (Directory.Exists(path))
             {
                 throw Fail(Codes.FileUnreadable, "is a directory, not a load file", path);
@@ -88,6 +88,7 @@ public static class LoadFileReader
         var warnings = new List<Diagnostic>();
         try
         {
+            RequireRegular(path, displayName);
             if (Directory.Exists(path))
             {
                 throw Fail(Codes.FileUnreadable, "is a directory, not a load file", displayName);
@@ -237,9 +238,9 @@ public static class LoadFileReader
     {
         if (path == "-")
         {
-            using Stream stdin = Console.OpenStandardInput();
-            return ReadAllBounded(stdin, options.MaxJsonBytes, "-");
+            return StandardInput(options);
         }
+        RequireRegular(path, path);
         if (Directory.Exists(path))
         {
             throw Fail(Codes.FileUnreadable, "is a directory, not a load file", path);
@@ -293,20 +294,29 @@ public static class LoadFileReader
         return new ReadResult(header, warnings);
     }
 
-    private static byte[] ReadAllBounded(Stream s, long limit, string name)
+    private static byte[] StandardInput(ReadOptions options)
     {
-        using var ms = new MemoryStream();
-        byte[] buffer = new byte[1 << 16];
-        int n;
-        while ((n = s.Read(buffer, 0, buffer.Length)) > 0)
+        try
         {
-            ms.Write(buffer, 0, n);
-            if (ms.Length > limit)
-            {
-                throw Fail(Codes.FileTooLarge, $"input is larger than the JSON limit of {limit} bytes", name);
-            }
+            return InputFiles.ReadStandardInput(options.MaxJsonBytes);
         }
-        return ms.ToArray();
+        catch (UnreadableInputException e)
+        {
+            throw new InputError(e.Diagnostic);
+        }
+    }
+
+    /// <summary>Devices, FIFOs and sockets are refused before they are opened (opening a FIFO blocks, a device never ends).</summary>
+    internal static void RequireRegular(string path, string display)
+    {
+        try
+        {
+            InputFiles.RequireRegular(path, display);
+        }
+        catch (UnreadableInputException e)
+        {
+            throw new InputError(e.Diagnostic);
+        }
     }
 
     // The diagnostics of the JSON token reader's errors, the same for a file read whole and one streamed.

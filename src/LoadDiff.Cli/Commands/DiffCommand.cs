@@ -112,10 +112,7 @@ public static class DiffCommand
     {
         if (operand == "-")
         {
-            using Stream stdin = Console.OpenStandardInput();
-            using var ms = new MemoryStream();
-            stdin.CopyTo(ms);
-            return new Source("-", ms.ToArray(), Directory.GetCurrentDirectory());
+            return new Source("-", InputFiles.ReadStandardInput(new ReadOptions().MaxJsonBytes), Directory.GetCurrentDirectory());
         }
         if (GitSource.IsRevisionPath(operand))
         {
@@ -218,6 +215,7 @@ public static class DiffCommand
         {
             bool added = oldFile == "/dev/null";
             output.WriteLine(added ? $"new load file {path}" : $"deleted load file {path}");
+            InputFiles.RequireRegular(added ? newFile : oldFile, added ? newFile : oldFile);
             string text = File.ReadAllText(added ? newFile : oldFile);
             foreach (ListingLine l in ListingDiff.Lines(added ? "" : text, added ? text : ""))
             {
@@ -225,6 +223,8 @@ public static class DiffCommand
             }
             return ExitCodes.Success;
         }
+        InputFiles.RequireRegular(oldFile, oldName);
+        InputFiles.RequireRegular(newFile, newName);
         var a = new Source(oldName, File.ReadAllBytes(oldFile), "") { WithoutTables = true };
         var b = new Source(newName, File.ReadAllBytes(newFile), "") { WithoutTables = true };
         var captured = new StringWriter();
@@ -268,6 +268,7 @@ public static class DiffCommand
     // this prints, so the output depends only on the content: no path, and numbers that rounding cannot change.
     private static int TextConv(string file, TextWriter output, TextWriter error)
     {
+        InputFiles.RequireRegular(file, file);
         byte[] bytes = File.Exists(file) ? File.ReadAllBytes(file) : throw new UsageException($"'{file}': file not found");
         if (IsTable(file))
         {

@@ -61,10 +61,7 @@ public static class FmtCommand
             SourceReadResult read;
             if (path == "-")
             {
-                using Stream stdin = Console.OpenStandardInput();
-                using var ms = new MemoryStream();
-                stdin.CopyTo(ms);
-                original = ms.ToArray();
+                original = InputFiles.ReadStandardInput(new ReadOptions().MaxJsonBytes);
                 read = LoadDocumentReader.ReadBytes(original, "-", Directory.GetCurrentDirectory());
             }
             else

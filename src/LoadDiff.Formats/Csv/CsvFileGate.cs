@@ -11,6 +11,7 @@ internal static class CsvFileGate
     /// <summary>Refuses a missing file, one over the size limit, and one that is not a regular file.</summary>
     public static void Check(string path, string display, ReadOptions options)
     {
+        LoadFileReader.RequireRegular(path, display);
         var info = new FileInfo(path);
         if (info.LinkTarget is not null && info.ResolveLinkTarget(returnFinalTarget: true) is FileInfo target)
         {
