@@ -213,21 +213,31 @@ public static class LoadFileReader
     }
 
     // The character column of a reader position given as (0-based line, byte in line).
+    // The column (in characters) of a byte position in line rl (from 0, lines ending at LF as the JSON reader counts
+    // them), read in blocks: a file of one endless line must not be held in memory to place an error at its start.
     private static int ColumnOf(string path, long skip, int rl, long bytePosition)
     {
-        using var s = new StreamReader(new FileStream(path, FileMode.Open, FileAccess.Read, FileShare.Read) { Position = skip });
-        string? line = null;
-        for (int i = 0; i <= rl; i++)
+        using var s = new FileStream(path, FileMode.Open, FileAccess.Read, FileShare.Read, 1 << 16, FileOptions.SequentialScan) { Position = skip };
+        byte[] buffer = new byte[1 << 16];
+        int line = 0, n = 0;
+        long inLine = 0;
+        int got;
+        while ((got = s.Read(buffer, 0, buffer.Length)) > 0)
         {
-            line = s.ReadLine();
-        }
-        byte[] bytes = System.Text.Encoding.UTF8.GetBytes(line ?? "");
-        int n = 0;
-        for (int i = 0; i < Math.Min(bytePosition, bytes.Length); i++)
-        {
-            if ((bytes[i] & 0xC0) != 0x80)
+            for (int i = 0; i < got; i++)
             {
-                n++;
+                byte b = buffer[i];
+                if (line < rl)
+                {
+                    line += b == (byte)'\n' ? 1 : 0;
+                    continue;
+                }
+                if (inLine >= bytePosition || b == (byte)'\n')
+                {
+                    return n + 1;
+                }
+                n += (b & 0xC0) != 0x80 ? 1 : 0;
+                inLine++;
             }
         }
         return n + 1;

@@ -88,5 +88,39 @@ public class StreamingJsonTests
         Assert.Equal("$.cases.many.loads[25000].value[2]", r.Error.Location.JsonPath);
     }
 
+    // Padding far longer than the streamed reader's 64 KiB buffer: white space (with and without line breaks) before,
+    // inside and after the document, and errors behind it. The in-memory reader, which sees the whole text at once,
+    // is the reference for what is read and for every error's line and column.
+    public static TheoryData<string, string> Padded() => new()
+    {
+        { "spaces before", new string(' ', 300_000) + Doc },
+        { "lines before", string.Concat(Enumerable.Repeat("  \r\n\t", 70_000)) + Doc },
+        { "inside", Doc.Replace("\"loads\":", "\"loads\":" + new string('\n', 200_000) + new string(' ', 100_000), StringComparison.Ordinal) },
+        { "after", Doc + new string(' ', 200_000) + "\n\n" + new string(' ', 150_000) },
+        { "error after spaces", Doc + new string(' ', 200_000) + "x" },
+        { "error after lines", Doc + string.Concat(Enumerable.Repeat(" \n", 150_000)) + "   x" },
+        { "error inside after lines", Doc.Replace("[0, 0, -1]", "[0, 0," + new string('\n', 100_000) + "   -1e]", StringComparison.Ordinal) },
+        { "NUL bytes", new string('\0', 300_000) },
+        { "NUL after spaces", new string(' ', 100_000) + new string('\0', 300_000) },
+        { "NUL after document", Doc + new string('\0', 300_000) },
+    };
+
+    private const string Doc = """{ "cases": { "a": { "loads": [ { "id": "p", "kind": "force", "at": [1, 2, 0], "value": [0, 0, -1] } ] } } }""";
+
+    [Theory]
+    [MemberData(nameof(Padded))]
+    public void Padding_and_the_errors_behind_it_read_as_in_memory(string what, string text)
+    {
+        using var t = new TempFolder();
+        string path = t.Write("padded.loads.json", text);
+        var a = new CollectingSink();
+        var b = new CollectingSink();
+        ReadResult whole = LoadFileReader.Read(path, a);
+        ReadResult streamed = LoadFileReader.Read(path, b, Streamed);
+        Assert.True(whole.Succeeded == streamed.Succeeded, what);
+        Assert.Equal(whole.Diagnostics.Select(Describe), streamed.Diagnostics.Select(Describe));
+        Assert.Equal(a.Cases.SelectMany(c => c.Items), b.Cases.SelectMany(c => c.Items));
+    }
+
     private static string Describe(Diagnostic d) => $"{d.Code} {d.Severity} {d.Location.Line}:{d.Location.Column} {d.Location.JsonPath}";
 }

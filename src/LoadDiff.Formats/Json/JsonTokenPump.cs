@@ -58,7 +58,8 @@ internal sealed class JsonTokenPump : IDisposable
             }
             catch (JsonException e)
             {
-                throw JsonSyntaxError.From(e);
+                // After white space was dropped the reader's line count is short: place the error at the token instead.
+                throw _dropped ? JsonSyntaxError.From(e).At(_bufferOffset + FirstNonWhiteSpace()) : JsonSyntaxError.From(e);
             }
             if (got)
             {
@@ -132,6 +133,31 @@ internal sealed class JsonTokenPump : IDisposable
         }
     }
 
+    private bool _dropped;
+
+    private int FirstNonWhiteSpace()
+    {
+        int i = _start;
+        while (i < _end && _buffer[i] is (byte)' ' or (byte)'\t' or (byte)'\r' or (byte)'\n')
+        {
+            i++;
+        }
+        return i;
+    }
+
+    private void ThrowIfMalformed()
+    {
+        var probe = new Utf8JsonReader(_buffer.AsSpan(_start, _end - _start), isFinalBlock: true, _state);
+        try
+        {
+            probe.Read();
+        }
+        catch (JsonException e)
+        {
+            throw _dropped ? JsonSyntaxError.From(e).At(_bufferOffset + FirstNonWhiteSpace()) : JsonSyntaxError.From(e);
+        }
+    }
+
     private void Refill()
     {
         int pending = _end - _start;
@@ -141,6 +167,19 @@ internal sealed class JsonTokenPump : IDisposable
             _bufferOffset += _start;
             _start = 0;
             _end = pending;
+        }
+        if (_end == _buffer.Length && FirstNonWhiteSpace() == _end)
+        {
+            // A buffer of nothing but white space between tokens: drop it rather than grow, so padding costs no memory.
+            _bufferOffset += _end;
+            _start = _end = 0;
+            _dropped = true;
+        }
+        else if (_end == _buffer.Length && _buffer[FirstNonWhiteSpace()] != (byte)'"')
+        {
+            // Only a string can be longer than the buffer; anything else that fills it is an error the reader finds at
+            // once when told the text ends here (a file of NUL bytes, say) — reported instead of read to the end.
+            ThrowIfMalformed();
         }
         if (_end == _buffer.Length)
         {

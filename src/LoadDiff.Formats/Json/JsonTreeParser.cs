@@ -47,6 +47,9 @@ internal sealed class JsonSyntaxError : Exception
     /// <summary>The JSON is well formed but a string in it is not Unicode text.</summary>
     public bool InvalidText { get; init; }
 
+    /// <summary>The same error placed at an offset of the text (when the reader's own line count cannot be used).</summary>
+    public JsonSyntaxError At(long offset) => new(Message, offset) { TooDeep = TooDeep, InvalidText = InvalidText };
+
     public static JsonSyntaxError From(JsonException e)
     {
         string message = e.Message;
