@@ -14,9 +14,11 @@ public partial class BadInputCorpusTests
 {
     private static readonly string BadFolder = CliProcess.Fixture("bad");
 
-    // Codes without a corpus file: they need a missing file or inputs far over a size limit (see the README).
+    // Codes without a corpus file: they need a missing file or inputs far over a size limit (see the README), or are
+    // distribute's refusals of a load file and a points file together (tested in DistributeCommandTests).
     private static readonly string[] CodesWithoutCorpusFile =
-        [Codes.FileUnreadable, Codes.FileTooLarge, Codes.TooManyItems, Codes.LineTooLong, Codes.NoSupportPoints];
+        [Codes.FileUnreadable, Codes.FileTooLarge, Codes.TooManyItems, Codes.LineTooLong, Codes.NoSupportPoints,
+         Codes.IllConditionedPoints, Codes.DistributionFailsCheck];
 
     /// <summary>The naming rule of the corpus: <c>LD*.loads.json</c> and <c>LD*-direct-*.csv</c> are run; other CSVs are helpers.</summary>
     public static bool IsRunnable(string name) =>

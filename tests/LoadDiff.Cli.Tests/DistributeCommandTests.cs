@@ -3,7 +3,7 @@ using LoadDiff.Cli.Tests.Support;
 
 namespace LoadDiff.Cli.Tests;
 
-public class DistributeCommandTests
+public partial class DistributeCommandTests
 {
     private static readonly string Skid = CliProcess.Fixture("equipment-skid", "vendor-anchor-loads.loads.json");
     private static readonly string Supports = CliProcess.Fixture("equipment-skid", "support-points.csv");

@@ -109,7 +109,8 @@ public static class CheckCommand
         }
     }
 
-    private static Option<double> Tolerance(string name, string description, double fallback) => new(name)
+    /// <summary>A non-negative tolerance option with a default (shared with 'distribute', which verifies with the same rule).</summary>
+    internal static Option<double> Tolerance(string name, string description, double fallback) => new(name)
     {
         Description = description,
         DefaultValueFactory = _ => fallback,

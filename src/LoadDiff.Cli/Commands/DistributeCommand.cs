@@ -1,8 +1,11 @@
 using System.CommandLine;
 using LoadDiff.Core;
 using LoadDiff.Core.Distribution;
+using LoadDiff.Core.Equivalence;
 using LoadDiff.Core.Loads;
+using LoadDiff.Core.Model;
 using LoadDiff.Core.Reduction;
+using LoadDiff.Formats;
 using LoadDiff.Formats.Csv;
 using LoadDiff.Formats.Diagnostics;
 using LoadDiff.Formats.Json;
@@ -12,7 +15,8 @@ namespace LoadDiff.Cli.Commands;
 
 /// <summary>
 /// <c>loaddiff distribute FILE --onto POINTS.csv</c>: a substitute of forces at the given points (and optionally couples),
-/// statically equivalent to each case by construction and of minimum (weighted) norm.
+/// statically equivalent to each case and of minimum (weighted) norm. The substitute is written only after it has passed
+/// the check's own rule (<see cref="EquivalenceCheck.Run"/>) against FILE, read back from the bytes about to be written.
 /// </summary>
 public static class DistributeCommand
 {
@@ -32,6 +36,8 @@ public static class DistributeCommand
         {
             Description = "Also place a couple at each point (needed when the points lie on one line and the load twists about it).",
         };
+        var forceTol = CheckCommand.Tolerance("--force-tol", "Absolute force tolerance F the substitute is verified with, as for 'loaddiff check' (default 0).", 0);
+        var momentTol = CheckCommand.Tolerance("--moment-tol", "Absolute moment tolerance M the substitute is verified with, as for 'loaddiff check' (default 0).", 0);
         var output = new Option<string?>("--output", "-o")
         {
             Description = "Write the substitute to this .loads.json file (atomically; never over an input). Default: standard output.",
@@ -39,12 +45,14 @@ public static class DistributeCommand
         };
         var command = new Command("distribute",
             "Distribute every load case of FILE onto the points of POINTS.csv: forces at the points (and couples with --couples) "
-            + "that are statically equivalent to the case by construction and minimise Σ|F_i|²/w_i, which for equal bolts in a "
-            + "plane is the elastic method. The result is a load file that 'loaddiff check FILE OUT' accepts and passes. "
-            + "Refuses, with exit code 2, when the points cannot carry a case (for example a twist about the line of collinear points).\n\n"
+            + "that are statically equivalent to the case and minimise Σ|F_i|²/w_i, which for equal bolts in a "
+            + "plane is the elastic method. Before anything is written the result is checked against FILE with the rule of "
+            + "'loaddiff check' (default tolerances, or --force-tol/--moment-tol); exit code 1, and nothing written, when it would fail. "
+            + "Refuses, with exit code 2, when the points cannot carry a case (for example a twist about the line of collinear points) "
+            + "or are too close together for it (condition number above " + ConditionLimitText + ").\n\n"
             + "Example:\n  loaddiff distribute fixtures/equipment-skid/vendor-anchor-loads.loads.json --onto fixtures/equipment-skid/support-points.csv -o skid-supports.loads.json")
         {
-            file, onto, cases, couples, output,
+            file, onto, cases, couples, forceTol, momentTol, output,
         };
         command.SetAction(parse =>
         {
@@ -69,21 +77,28 @@ public static class DistributeCommand
             string[] selected = parse.GetValue(cases) ?? [];
             var distributor = new LoadDistributor(points, parse.GetValue(couples));
             (List<WrittenCase> written, List<LoadCombination> combinations) = Distribute(loaded, distributor, pointsPath, selected, error);
+            var tolerance = ToleranceSpec.Create(ToleranceSpec.DefaultRelative, parse.GetValue(forceTol), parse.GetValue(momentTol));
 
             string note = $"Written by loaddiff {AppInfo.Version} distribute: minimum-norm {(parse.GetValue(couples) ? "forces and couples" : "forces")} at the "
-                + $"{points.Count} points of {Path.GetFileName(pointsPath)}, statically equivalent by construction to each case of {Path.GetFileName(path)}. "
+                + $"{points.Count} points of {Path.GetFileName(pointsPath)}, statically equivalent to each case of {Path.GetFileName(path)} "
+                + "(checked with the rule of 'loaddiff check' before it was written). "
                 + "Static equivalence is not equivalence of internal forces or stresses: see 'loaddiff sections'.";
             string title = $"{loaded.Header.Title ?? Path.GetFileName(path)}, distributed onto {Path.GetFileName(pointsPath)}";
-            void WriteTo(Stream s) => LoadFileWriter.Write(s, note, title, loaded.Units, written, combinations);
+            using var ms = new MemoryStream();
+            LoadFileWriter.Write(ms, note, title, loaded.Units, written, combinations);
+            byte[] bytes = ms.ToArray();
+            if (Verify(loaded, bytes, outPath ?? "the substitute", written, combinations, tolerance) is { } failure)
+            {
+                error.WriteLine(failure.ToString());
+                return ExitCodes.Different;
+            }
             if (outPath is null)
             {
-                using var ms = new MemoryStream();
-                WriteTo(ms);
-                stdout.Write(System.Text.Encoding.UTF8.GetString(ms.ToArray()));
+                stdout.Write(System.Text.Encoding.UTF8.GetString(bytes));
             }
             else
             {
-                AtomicFile.Write(outPath, [path, pointsPath], WriteTo);
+                AtomicFile.Write(outPath, [path, pointsPath], s => s.Write(bytes));
                 Summary(stdout, loaded, distributor, written, outPath);
             }
             return ExitCodes.Success;
@@ -111,6 +126,7 @@ public static class DistributeCommand
             }
         }
         string u = loaded.Units.Force.Symbol, m = loaded.Units.MomentSymbol, l = loaded.Units.Length.Symbol;
+        IReadOnlyList<string> coupleIds = CoupleIds.For(distributor.Points);
         var written = new List<WrittenCase>();
         foreach (string name in loaded.Sink.CaseNames.Where(n => wanted.Count == 0 || wanted.Contains(n)))
         {
@@ -130,10 +146,16 @@ public static class DistributeCommand
                     + $"and a moment {NumberText.Readable(d.UncarriedMoment, LoadDistributor.FeasibilityTolerance * r.MomentScale(distributor.Centroid))} {m} "
                     + $"about their centroid {NumberText.Readable(distributor.Centroid)} {l}. Add a point off that line or plane, or give --couples.");
             }
-            if (r.GrossCouple > 0 && r.GrossForce * distributor.LengthScale <= 1e-10 * r.GrossCouple)
+            double condition = distributor.ConditionNumber(r.Bounds);
+            if (!(condition <= LoadDistributor.ConditionLimit))
             {
-                error.WriteLine($"loaddiff: note: case '{name}' has (next to) no forces, only couples, so 'check' allows |ΔR| ≈ 0 and the rounding of the "
-                    + "cancelling forces written here can fail it; give check a small --force-tol (for example 1e-9) for this case");
+                error.WriteLine(new Diagnostic(Codes.IllConditionedPoints, Severity.Error,
+                    $"case '{name}': the points are too close together for this load: the equilibrium equations have condition number "
+                    + $"{condition.ToString("0.#e+0", System.Globalization.CultureInfo.InvariantCulture)} (the limit is {ConditionLimitText}; their spread about the centroid is "
+                    + $"{NumberText.Readable(distributor.LengthScale)} {l}, the load reaches {NumberText.Readable(Reach(r.Bounds, distributor.Centroid))} {l} from it), "
+                    + "so the forces would be about that many times the load and lose as many digits; spread the points or merge them into one",
+                    new SourceLocation(pointsPath)).ToString());
+                throw new InputFailureException(pointsPath);
             }
             var items = new List<LoadItem>();
             for (int i = 0; i < distributor.Points.Count; i++)
@@ -145,7 +167,7 @@ public static class DistributeCommand
             {
                 if (!d.Couples[i].IsZero)
                 {
-                    items.Add(new FreeCouple(distributor.Points[i].Id + "-couple", d.Couples[i]));
+                    items.Add(new FreeCouple(coupleIds[i], d.Couples[i]));
                 }
             }
             written.Add(new WrittenCase(name, loaded.Sink.CaseTitle(name), items));
@@ -153,6 +175,44 @@ public static class DistributeCommand
         var names = written.Select(w => w.Name).ToHashSet(StringComparer.Ordinal);
         var combinations = loaded.Sink.Combinations.Where(c => c.Factors.All(f => names.Contains(f.Key))).ToList();
         return (written, combinations);
+    }
+
+    private static string ConditionLimitText => LoadDistributor.ConditionLimit.ToString("0e+0", System.Globalization.CultureInfo.InvariantCulture);
+
+    private static double Reach(Box? loaded, Vector3 centroid) => loaded?.Corners.Max(c => (c - centroid).Length) ?? 0;
+
+    // The check itself, not a copy of its rule: the bytes about to be written are read back by the load-file reader and
+    // compared with FILE by EquivalenceCheck.Run, the code path of 'loaddiff check FILE OUT'. Null when they pass.
+    private static Diagnostic? Verify(LoadedFile loaded, byte[] bytes, string outName, List<WrittenCase> written, List<LoadCombination> combinations,
+        ToleranceSpec tolerance)
+    {
+        var sink = new ReductionSink();
+        ReadResult back = LoadFileReader.ReadJson(bytes, outName, Directory.GetCurrentDirectory(), sink, new ReadOptions { TargetUnits = loaded.Units });
+        var where = new SourceLocation(loaded.Path);
+        if (!back.Succeeded || back.Header is null)
+        {
+            Diagnostic first = back.Diagnostics.First(d => d.Severity == Severity.Error);
+            return new Diagnostic(Codes.DistributionFailsCheck, Severity.Error,
+                $"the substitute would not be read back ({first.Code}: {first.Message}), so nothing was written", where);
+        }
+        string[] selected = [.. written.Select(w => w.Name), .. combinations.Select(c => c.Name)];
+        Vector3 point = loaded.ResolvePoint(new ReferenceChoice("centroid"), out string description);
+        CheckResult result = EquivalenceCheck.Run(loaded.Side, new CheckSide(outName, sink, back.Header), loaded.Units, point, description, tolerance, selected);
+        if (result.Equivalent)
+        {
+            return null;
+        }
+        CaseComparison failed = result.Comparisons.First(c => !c.Equivalent);
+        string f = loaded.Units.Force.Symbol, m = loaded.Units.MomentSymbol;
+        string residual = failed.Residual is { } res && failed.Tolerance is { } tol
+            ? $": |ΔR| = {NumberText.Readable(res.ForceNorm)} {f} (allowed {NumberText.Readable(tol.Force)}), "
+                + $"worst |ΔM| = {NumberText.Readable(res.WorstMomentNorm)} {m} (allowed {NumberText.Readable(tol.Moment)})"
+            : "";
+        string hint = failed.Original is { GrossForce: 0 } ? "; it has no forces, so |ΔR| is allowed only rounding: give a small --force-tol (and the same to check)" : "";
+        return new Diagnostic(Codes.DistributionFailsCheck, Severity.Error,
+            $"{(failed.Kind == EntryKind.Case ? "case" : "combination")} '{failed.Name}': the forces found at the points would fail 'loaddiff check' "
+            + $"against {loaded.Path}{residual}; rounding swamps them at these points{hint}. Nothing was written",
+            where);
     }
 
     private static void Summary(TextWriter w, LoadedFile loaded, LoadDistributor d, List<WrittenCase> cases, string outPath)
@@ -177,6 +237,6 @@ public static class DistributeCommand
             }
         }
         w.WriteLine();
-        w.WriteLine("Statically equivalent by construction; verify with 'loaddiff check'. " + Caution.Text);
+        w.WriteLine("Statically equivalent: checked against the original with the rule of 'loaddiff check' before writing. " + Caution.Text);
     }
 }

@@ -25,11 +25,19 @@ public sealed class LoadDistributor
     /// <summary>A residual of the equilibrium equations below this fraction of the load's scale is rounding.</summary>
     public const double FeasibilityTolerance = 1e-9;
 
+    /// <summary>
+    /// The largest <see cref="ConditionNumber"/> a distribution is trusted with: the forces can be this many times the
+    /// load, and as many of the 16 digits of a double are lost in forming them; beyond 1e8 fewer than half remain, and
+    /// the points are, for this load, practically coincident or on one line (common practice, no source).
+    /// </summary>
+    public const double ConditionLimit = 1e8;
+
     private readonly SupportPoint[] _points;
     private readonly bool _couples;
     private readonly Matrix<double> _right;    // m × 6: columns of V (right singular vectors of A) for the kept values
     private readonly Vector<double> _inverse;  // 1/σ for kept values, 0 otherwise
     private readonly Matrix<double> _left;     // 6 × 6: U (left singular vectors of A)
+    private readonly Vector<double> _sigma;    // singular values of A
     private readonly double[] _scale;          // x = scale ⊙ y: the weighting
 
     /// <summary>Prepares the distribution onto <paramref name="points"/> (the factorisation is done once for all cases).</summary>
@@ -86,7 +94,7 @@ public sealed class LoadDistributor
                 }
             }
         }
-        (_left, _inverse, _right, Rank) = ThinPseudoInverse(a);
+        (_left, _sigma, _inverse, _right, Rank) = ThinPseudoInverse(a);
     }
 
     /// <summary>The centroid of the points, about which the equations are set up (length units).</summary>
@@ -100,6 +108,32 @@ public sealed class LoadDistributor
 
     /// <summary>The points, in order.</summary>
     public IReadOnlyList<SupportPoint> Points => _points;
+
+    /// <summary>
+    /// σ_max/σ_min (over the singular values kept, see <see cref="Rank"/>) of the equilibrium equations with the moment
+    /// rows divided by L = max(ℓ, ρ), ρ the distance from the centroid to the farthest corner of <paramref name="loaded"/>
+    /// (the box of a case's loaded geometry; null for a case of free couples only). The equations are solved with the
+    /// moments over ℓ, which keeps them well scaled whatever the points' spread, but a load at lever arm ρ makes forces
+    /// up to ρ/ℓ times itself: this number is that amplification, dimensionless and the same in any units.
+    /// </summary>
+    public double ConditionNumber(Box? loaded)
+    {
+        double reach = 0;
+        if (loaded is not null)
+        {
+            foreach (Vector3 corner in loaded.Corners)
+            {
+                reach = Math.Max(reach, (corner - Centroid).Length);
+            }
+        }
+        double shrink = LengthScale / Math.Max(LengthScale, reach);
+        // A ≈ U_r S_r W_rᵀ with W_r orthonormal, so D·A (D scaling the moment rows) has the singular values of D·U_r·S_r.
+        var kept = Enumerable.Range(0, _sigma.Count).Where(i => _inverse[i] != 0).ToArray();
+        Matrix<double> scaled = Matrix<double>.Build.Dense(6, kept.Length, (row, j) =>
+            _left[row, kept[j]] * _sigma[kept[j]] * (row >= 3 ? shrink : 1));
+        Vector<double> s = scaled.Svd(computeVectors: false).S;
+        return s.Maximum() / s.Minimum();
+    }
 
     /// <summary>
     /// Distributes <paramref name="system"/>; <paramref name="forceScale"/> and <paramref name="momentScale"/> (the
@@ -164,7 +198,7 @@ public sealed class LoadDistributor
         }
     }
 
-    private static (Matrix<double> Left, Vector<double> Inverse, Matrix<double> Right, int Rank) ThinPseudoInverse(Matrix<double> a)
+    private static (Matrix<double> Left, Vector<double> Sigma, Vector<double> Inverse, Matrix<double> Right, int Rank) ThinPseudoInverse(Matrix<double> a)
     {
         Matrix<double> left, right;
         Vector<double> sigma;
@@ -196,6 +230,6 @@ public sealed class LoadDistributor
                 rank++;
             }
         }
-        return (left, inverse, right, rank);
+        return (left, sigma, inverse, right, rank);
     }
 }

@@ -42,13 +42,10 @@ public static class SupportPointReader
             while (csv.ReadRow())
             {
                 string name = csv.Text(id);
-                if (name.Length == 0)
+                // The id becomes the id of the force placed there, so it obeys the rule of ids in a load description.
+                if (ItemIds.Problem(name, "a support point id") is { } problem)
                 {
-                    throw csv.Fail(Codes.InvalidId, "a support point needs an id", id);
-                }
-                if (NameCharacters.FirstForbidden(name) is int bad and >= 0)
-                {
-                    throw csv.Fail(Codes.InvalidId, NameCharacters.Describe("a support point id", name, bad), id);
+                    throw csv.Fail(Codes.InvalidId, problem, id);
                 }
                 if (!seen.Add(name))
                 {

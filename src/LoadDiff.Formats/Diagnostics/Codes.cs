@@ -43,6 +43,8 @@ public static class Codes
     public const string TooManyItems = "LD071";
     public const string LineTooLong = "LD072";
     public const string NoSupportPoints = "LD073";
+    public const string IllConditionedPoints = "LD074";
+    public const string DistributionFailsCheck = "LD075";
     public const string OutputClosed = "LD080";
 #pragma warning restore CS1591
 

@@ -200,11 +200,10 @@ internal sealed class LoadJsonWalker
         if (item["id"] is { } idNode)
         {
             id = String(idNode, path + ".id");
-            if (id.Length == 0 || id.StartsWith('~'))
+            if (ItemIds.Problem(id, "an id") is { } problem)
             {
-                throw Error(idNode, path + ".id", Codes.InvalidId, "an id must be non-empty and must not start with '~' (reserved for derived ids)");
+                throw Error(idNode, path + ".id", Codes.InvalidId, problem);
             }
-            CheckName(idNode, path + ".id", id, "an id");
             if (!ids.Add(id))
             {
                 throw Error(idNode, path + ".id", Codes.DuplicateId, $"id '{id}' is used twice in this case");
