@@ -96,11 +96,13 @@ public static class DocumentDiffer
 
         var items = new List<ItemChange>();
         var resultants = new List<ResultantChange>();
-        IReadOnlyList<string> caseNames = [.. a.Cases.Select(c => c.Name), .. b.Cases.Select(c => c.Name).Where(n => a.Cases.All(c => c.Name != n))];
+        // Looked up by name, not searched: files with 10⁵ cases are compared in linear time.
+        Dictionary<string, SourceCase> casesA = ByName(a.Cases, c => c.Name), casesB = ByName(b.Cases, c => c.Name);
+        IReadOnlyList<string> caseNames = [.. a.Cases.Select(c => c.Name), .. b.Cases.Select(c => c.Name).Where(n => !casesA.ContainsKey(n))];
         foreach (string name in caseNames.Where(Wanted))
         {
-            SourceCase? ca = a.Cases.FirstOrDefault(c => c.Name == name);
-            SourceCase? cb = b.Cases.FirstOrDefault(c => c.Name == name);
+            SourceCase? ca = casesA.GetValueOrDefault(name);
+            SourceCase? cb = casesB.GetValueOrDefault(name);
             if (ca is null || cb is null)
             {
                 SourceCase only = (ca ?? cb)!;
@@ -127,11 +129,12 @@ public static class DocumentDiffer
             });
         }
 
-        IReadOnlyList<string> comboNames = [.. a.Combinations.Select(c => c.Name), .. b.Combinations.Select(c => c.Name).Where(n => a.Combinations.All(c => c.Name != n))];
+        Dictionary<string, LoadCombination> combosA = ByName(a.Combinations, c => c.Name), combosB = ByName(b.Combinations, c => c.Name);
+        IReadOnlyList<string> comboNames = [.. a.Combinations.Select(c => c.Name), .. b.Combinations.Select(c => c.Name).Where(n => !combosA.ContainsKey(n))];
         foreach (string name in comboNames.Where(Wanted))
         {
-            LoadCombination? ka = a.Combinations.FirstOrDefault(c => c.Name == name);
-            LoadCombination? kb = b.Combinations.FirstOrDefault(c => c.Name == name);
+            LoadCombination? ka = combosA.GetValueOrDefault(name);
+            LoadCombination? kb = combosB.GetValueOrDefault(name);
             if (ka is null || kb is null || !SameFactors(ka, kb))
             {
                 settings.Add(new SettingChange("combination " + name, Kind(ka, kb), ka is null ? null : Factors(ka), kb is null ? null : Factors(kb), ""));
@@ -181,6 +184,17 @@ public static class DocumentDiffer
     }
 
     // case name → the files its mesh and forces items reference, in either version
+    // Names are unique within a document (its keys); the first one wins should a caller build a document otherwise.
+    private static Dictionary<string, T> ByName<T>(IEnumerable<T> entries, Func<T, string> name)
+    {
+        var d = new Dictionary<string, T>(StringComparer.Ordinal);
+        foreach (T e in entries)
+        {
+            d.TryAdd(name(e), e);
+        }
+        return d;
+    }
+
     private static Dictionary<string, List<string>> TablesNeeded(LoadDocument a, LoadDocument b)
     {
         var needs = new Dictionary<string, List<string>>(StringComparer.Ordinal);
@@ -214,9 +228,10 @@ public static class DocumentDiffer
         {
             Fields = [.. y.Fields.Select(f => x[f.Name] is { } u && ctx.Same(u, f.Value) ? f with { Value = u } : f)],
         };
+        Dictionary<string, SourceCase> casesA = ByName(a.Cases, c => c.Name);
         SourceCase Case(SourceCase cb)
         {
-            SourceCase? ca = a.Cases.FirstOrDefault(c => c.Name == cb.Name);
+            SourceCase? ca = casesA.GetValueOrDefault(cb.Name);
             if (ca is null)
             {
                 return cb;
