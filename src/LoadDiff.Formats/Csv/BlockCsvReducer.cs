@@ -227,6 +227,10 @@ internal sealed class BlockCsvReducer
             throw new InputError(new Diagnostic(Codes.CsvNoHeader, Severity.Error,
                 "the CSV file is empty; expected a header row naming the columns", new SourceLocation(_display)));
         }
+        if (header.IndexOf('\r', StringComparison.Ordinal) is int cr and >= 0)
+        {
+            throw Fail(Codes.CsvCarriageReturnLines, CsvText.LoneCarriageReturn, 1, header.AsSpan(0, cr).Length + 1);
+        }
         string[] raw = header.Split(',');
         string[] names = raw.Select(h => h.Trim().Trim('"').ToLowerInvariant()).ToArray();
         for (int i = 0, column = 1; i < names.Length; column += raw[i].Length + 1, i++)

@@ -41,7 +41,11 @@ internal sealed class CsvRowReader : IDisposable
         {
             throw Fail(Codes.CsvNoHeader, "the CSV file is empty; expected a header row naming the columns", null);
         }
-        Split(line!);
+        if (line!.IndexOf('\r', StringComparison.Ordinal) is int cr and >= 0)
+        {
+            throw new InputError(new Diagnostic(Codes.CsvCarriageReturnLines, Severity.Error, CsvText.LoneCarriageReturn, new SourceLocation(_file, Line, cr + 1)));
+        }
+        Split(line);
         var header = _fields.Select(f => f.Trim().ToLowerInvariant()).ToList();
         var seen = new HashSet<string>(StringComparer.Ordinal);
         for (int i = 0; i < header.Count; i++)

@@ -40,6 +40,7 @@ public static class Codes
     public const string DegenerateTriangle = "LD065";
     public const string UnknownVertex = "LD066";
     public const string CsvUnknownLayout = "LD067";
+    public const string CsvCarriageReturnLines = "LD068";
     public const string TooManyItems = "LD071";
     public const string LineTooLong = "LD072";
     public const string NoSupportPoints = "LD073";
