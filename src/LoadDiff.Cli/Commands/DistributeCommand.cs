@@ -83,7 +83,8 @@ public static class DistributeCommand
             }
             else
             {
-                AtomicFile.Write(outPath, [path, pointsPath], WriteTo);
+                // never over FILE, POINTS.csv or a CSV table FILE references
+                AtomicFile.Write(outPath, [path, pointsPath, .. loaded.ReferencedFiles.Select(r => r.FullPath)], WriteTo);
                 Summary(stdout, loaded, distributor, written, outPath);
             }
             return ExitCodes.Success;
