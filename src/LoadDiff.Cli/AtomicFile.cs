@@ -4,6 +4,9 @@ namespace LoadDiff.Cli;
 public static class AtomicFile
 {
     /// <summary>Writes <paramref name="path"/> atomically; refuses to write over any of <paramref name="inputs"/>.</summary>
+    /// <param name="path">The output file.</param>
+    /// <param name="inputs">Every file read: the inputs as named and the files they reference (- is standard input).</param>
+    /// <param name="write">Writes the content.</param>
     /// <exception cref="UsageException">The target is an input, a directory, or cannot be written.</exception>
     public static void Write(string path, IEnumerable<string> inputs, Action<Stream> write)
     {
@@ -11,10 +14,7 @@ public static class AtomicFile
         ArgumentNullException.ThrowIfNull(inputs);
         ArgumentNullException.ThrowIfNull(write);
         string full = Path.GetFullPath(path);
-        if (inputs.Any(i => i != "-" && Path.GetFullPath(i) == full))
-        {
-            throw new UsageException($"'{path}' is an input file; refusing to write over it");
-        }
+        RefuseInputs(path, inputs);
         if (Directory.Exists(full))
         {
             throw new UsageException($"'{path}' is a directory; give a file name");
@@ -24,34 +24,26 @@ public static class AtomicFile
         {
             throw new UsageException($"cannot write '{path}': folder '{dir}' does not exist");
         }
-        string temp = Path.Combine(dir, "." + Path.GetFileName(full) + "." + Guid.NewGuid().ToString("N")[..8] + ".tmp");
-        try
-        {
-            using (var s = new FileStream(temp, FileMode.CreateNew, FileAccess.Write))
-            {
-                write(s);
-                s.Flush(flushToDisk: true);
-            }
-            File.Move(temp, full, overwrite: true);
-        }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
-        {
-            TryDelete(temp);
-            throw new UsageException($"cannot write '{path}': {e.Message}");
-        }
+        TemporaryWrite.Replace(full, path, write, keepMode: false);
     }
 
-    private static void TryDelete(string temp)
+    /// <summary>
+    /// Refuses <paramref name="path"/> when it is one of <paramref name="inputs"/>: the same path once symbolic links are
+    /// resolved, or (where the system tells) the same device and inode, which also catches hard links.
+    /// </summary>
+    /// <exception cref="UsageException">LD080, naming the input.</exception>
+    public static void RefuseInputs(string path, IEnumerable<string> inputs)
     {
-        try
+        ArgumentNullException.ThrowIfNull(path);
+        ArgumentNullException.ThrowIfNull(inputs);
+        string real = FileIdentity.RealPath(path);
+        FileIdentity? id = FileIdentity.Of(path);
+        foreach (string input in inputs.Where(i => i != "-" && !GitSource.IsRevisionPath(i)).Distinct(StringComparer.Ordinal))
         {
-            File.Delete(temp);
-        }
-        catch (IOException)
-        {
-        }
-        catch (UnauthorizedAccessException)
-        {
+            if (FileIdentity.RealPath(input) == real || (id is not null && FileIdentity.Of(input) is { } other && other.Device == id.Value.Device && other.Inode == id.Value.Inode))
+            {
+                throw new UsageException($"error {OutputCodes.OverInput}: '{path}' is the same file as the input file '{input}'; refusing to write over it (give another output name)");
+            }
         }
     }
 }

@@ -1,46 +1,46 @@
 namespace LoadDiff.Cli;
 
 /// <summary>
-/// Replaces an existing file's content atomically: the new content goes to a temporary file in the same folder,
-/// which is flushed and then renamed over the original. On any failure the temporary file is removed and the
-/// original is left as it was.
+/// Replaces an existing file's content atomically: the new content goes to a temporary file in the folder of the file
+/// itself (a symbolic link is followed, so the link stays a link), which is flushed and then renamed over it with its
+/// permissions. On any failure the temporary file is removed and the file is left as it was.
 /// </summary>
 public static class AtomicReplace
 {
-    /// <summary>Replaces <paramref name="path"/> with <paramref name="content"/>, keeping its permissions.</summary>
-    /// <exception cref="UsageException">The file cannot be replaced; the original is untouched.</exception>
-    public static void Write(string path, byte[] content)
+    /// <summary>Replaces <paramref name="path"/> (or the file its symbolic link points to) with <paramref name="content"/>.</summary>
+    /// <param name="path">The file as the user named it.</param>
+    /// <param name="content">The new content.</param>
+    /// <param name="readOnlyAllowed">Replace a file without write permission for its owner.</param>
+    /// <param name="splitLinksAllowed">Replace a file with more than one hard link (the other names keep the old content).</param>
+    /// <param name="referenced">Files the content was read with (never written over).</param>
+    /// <exception cref="UsageException">The file is protected or cannot be replaced; it is untouched.</exception>
+    public static void Write(string path, byte[] content, bool readOnlyAllowed = false, bool splitLinksAllowed = false, IEnumerable<string>? referenced = null)
     {
         ArgumentNullException.ThrowIfNull(path);
         ArgumentNullException.ThrowIfNull(content);
-        string full = Path.GetFullPath(path);
-        string dir = Path.GetDirectoryName(full)!;
-        string temp = Path.Combine(dir, "." + Path.GetFileName(full) + "." + Guid.NewGuid().ToString("N")[..8] + ".tmp");
-        try
+        // the rename must replace the file the link points to, in that file's folder, not the link
+        string target = FileIdentity.RealPath(path);
+        AtomicFile.RefuseInputs(target, referenced ?? []);
+        if (!OperatingSystem.IsWindows() && !readOnlyAllowed && !File.GetUnixFileMode(target).HasFlag(UnixFileMode.UserWrite))
         {
-            using (var s = new FileStream(temp, FileMode.CreateNew, FileAccess.Write))
-            {
-                s.Write(content);
-                s.Flush(flushToDisk: true);
-            }
-            if (!OperatingSystem.IsWindows())
-            {
-                File.SetUnixFileMode(temp, File.GetUnixFileMode(full));
-            }
-            File.Move(temp, full, overwrite: true);
+            throw new UsageException($"error {OutputCodes.ProtectedTarget}: '{path}' is read-only; the file is unchanged "
+                + $"(give {FmtOptionNames.ReplaceReadOnly} to replace it anyway, keeping its permissions)");
         }
-        // .NET reports EFBIG (file-size limit reached) as ArgumentOutOfRangeException from the write
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException or ArgumentOutOfRangeException)
+        if (!splitLinksAllowed && FileIdentity.Of(target) is { LinkCount: > 1 } id)
         {
-            try
-            {
-                File.Delete(temp);
-            }
-            catch (Exception cleanup) when (cleanup is IOException or UnauthorizedAccessException)
-            {
-                // the original is intact; a stray temporary file is the lesser harm
-            }
-            throw new UsageException($"cannot write '{path}': {e.Message} (the file is unchanged)");
+            throw new UsageException($"error {OutputCodes.ProtectedTarget}: '{path}' has {id.LinkCount} hard links; replacing it would leave the other names "
+                + $"with the old content, so the file is unchanged (give {FmtOptionNames.SplitHardLinks} to replace this name only)");
         }
+        TemporaryWrite.Replace(target, path, s => s.Write(content), keepMode: true);
     }
+}
+
+/// <summary>Names of the fmt options that lift a refusal of <see cref="AtomicReplace"/>, for its messages and the help.</summary>
+public static class FmtOptionNames
+{
+    /// <summary>Replace a read-only file.</summary>
+    public const string ReplaceReadOnly = "--replace-read-only";
+
+    /// <summary>Replace a file with several hard links, breaking the link.</summary>
+    public const string SplitHardLinks = "--split-hard-links";
 }

@@ -30,7 +30,7 @@ public static class LoadDiffApp
         if (ReferenceEquals(output, Console.Out) && LoadDiff.Formats.InputFiles.StandardOutputIsClosed())
         {
             // Results written nowhere would look like a run that found nothing: refuse before any work.
-            error.WriteLine($"loaddiff: error {LoadDiff.Formats.Diagnostics.Codes.OutputClosed}: standard output is closed; nothing could be written (redirect it to a file, or to /dev/null when only the exit code matters)");
+            error.WriteLine($"loaddiff: error {OutputCodes.OutputClosed}: standard output is closed; nothing could be written (redirect it to a file, or to /dev/null when only the exit code matters)");
             return ExitCodes.InputError;
         }
         RootCommand root = BuildRoot();

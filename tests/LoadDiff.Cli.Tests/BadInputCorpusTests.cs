@@ -18,8 +18,7 @@ public partial class BadInputCorpusTests
     // distribute's refusals of a load file and a points file together (tested in DistributeCommandTests).
     private static readonly string[] CodesWithoutCorpusFile =
         [Codes.FileUnreadable, Codes.FileTooLarge, Codes.TooManyItems, Codes.LineTooLong, Codes.NoSupportPoints,
-         Codes.IllConditionedPoints, Codes.DistributionFailsCheck,
-         Codes.OutputClosed]; // a closed standard output is no file: SpecialFilesTests closes it through bash
+         Codes.IllConditionedPoints, Codes.DistributionFailsCheck];
 
     /// <summary>The naming rule of the corpus: <c>LD*.loads.json</c> and <c>LD*-direct-*.csv</c> are run; other CSVs are helpers.</summary>
     public static bool IsRunnable(string name) =>

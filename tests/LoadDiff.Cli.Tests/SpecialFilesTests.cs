@@ -74,7 +74,7 @@ public sealed class SpecialFilesTests
         // Written nowhere, a result would be lost while the exit code still reported a verdict.
         (int exit, string stderr) = Shell(">&-", "check", "DEMO", "DEMO");
         Assert.Equal(2, exit);
-        Assert.StartsWith("loaddiff: error LD080: standard output is closed", stderr, StringComparison.Ordinal);
+        Assert.StartsWith("loaddiff: error LD083: standard output is closed", stderr, StringComparison.Ordinal);
         Assert.Single(stderr.TrimEnd('\n').Split('\n'));
     }
 

@@ -98,7 +98,8 @@ public static class DistributeCommand
             }
             else
             {
-                AtomicFile.Write(outPath, [path, pointsPath], s => s.Write(bytes));
+                // never over FILE, POINTS.csv or a CSV table FILE references
+                AtomicFile.Write(outPath, [path, pointsPath, .. loaded.ReferencedFiles.Select(r => r.FullPath)], s => s.Write(bytes));
                 Summary(stdout, loaded, distributor, written, outPath);
             }
             return ExitCodes.Success;

@@ -16,6 +16,15 @@ public static class FmtCommand
         var write = new Option<bool>("--write") { Description = "Replace FILE with its canonical form (atomically: temporary file in the same folder, then rename)." };
         var check = new Option<bool>("--check") { Description = "Write nothing; exit 1 when FILE is not in canonical form (for a pre-commit gate)." };
         var dropComments = new Option<bool>("--drop-comments") { Description = "Let --write replace a file that holds comments (the canonical form has none)." };
+        var replaceReadOnly = new Option<bool>(FmtOptionNames.ReplaceReadOnly)
+        {
+            Description = "Let --write replace a file without write permission for its owner (refused by default; the permissions are kept).",
+        };
+        var splitHardLinks = new Option<bool>(FmtOptionNames.SplitHardLinks)
+        {
+            Description = "Let --write replace a file with more than one hard link: this name gets the canonical form, the other names keep "
+                + "the old content (refused by default). A symbolic link is always followed and stays a link.",
+        };
         var commentsToNotes = new Option<bool>("--comments-to-notes")
         {
             Description = "Move each comment into the note of the document, case or item it directly precedes (appended to a note "
@@ -29,7 +38,7 @@ public static class FmtCommand
             + "Exit code 0 on success (or canonical with --check), 1 when --check finds the file not canonical, 2 on input or usage errors.\n\n"
             + "Examples:\n  loaddiff fmt model.loads.json\n  loaddiff fmt --write model.loads.json\n  loaddiff fmt --write --comments-to-notes model.loads.json\n  loaddiff fmt --check model.loads.json")
         {
-            file, write, check, dropComments, commentsToNotes,
+            file, write, check, dropComments, commentsToNotes, replaceReadOnly, splitHardLinks,
         };
         command.SetAction(parse =>
         {
@@ -119,7 +128,7 @@ public static class FmtCommand
             {
                 throw new UsageException($"internal check failed: the canonical form of '{path}' does not read back as the same model; the file is left unchanged (please report this)");
             }
-            AtomicReplace.Write(path, canonicalBytes);
+            AtomicReplace.Write(path, canonicalBytes, parse.GetValue(replaceReadOnly), parse.GetValue(splitHardLinks));
             error.WriteLine($"{path}: rewritten in canonical form");
             return ExitCodes.Success;
         });

@@ -46,7 +46,6 @@ public static class Codes
     public const string NoSupportPoints = "LD073";
     public const string IllConditionedPoints = "LD074";
     public const string DistributionFailsCheck = "LD075";
-    public const string OutputClosed = "LD080";
 #pragma warning restore CS1591
 
     /// <summary>The largest magnitude accepted for any number, so that squares and cross products cannot overflow.</summary>
