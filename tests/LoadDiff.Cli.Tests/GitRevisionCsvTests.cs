@@ -110,7 +110,7 @@ public sealed class GitRevisionCsvTests : IDisposable
         string model = Path.Combine(_repo.Path, "model.loads.json");
         CliRun run = CliProcess.RunIn(_repo.Path, "distribute", "model.loads.json", "--onto", "HEAD~1:supports.csv", "-o", "model.loads.json");
         Assert.True(run.ExitCode == 2, run.ToString());
-        Assert.Contains("is an input file", run.Stderr, StringComparison.Ordinal);
+        Assert.Contains("error LD080: 'model.loads.json' is the same file as the input file", run.Stderr, StringComparison.Ordinal);
         Assert.Equal(Lintel, File.ReadAllText(model));
     }
 
