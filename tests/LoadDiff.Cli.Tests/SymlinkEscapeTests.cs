@@ -183,7 +183,8 @@ public sealed class SymlinkEscapeTests : IDisposable
             foreach (string[] args in new[] { new[] { "diff", operand, "HEAD:model/good.loads.json" }, ["reduce", operand], ["check", "HEAD:model/good.loads.json", operand] })
             {
                 // refused even with --allow-outside: what a link in a revision points at is no part of that revision
-                foreach (string[] withFlag in new[] { args, [.. args, "--allow-outside"] })
+                // (diff has no --allow-outside: it never reads outside the folder)
+                foreach (string[] withFlag in args[0] == "diff" ? new[] { args } : new[] { args, [.. args, "--allow-outside"] })
                 {
                     CliRun run = CliProcess.RunIn(repo, withFlag);
                     Assert.True(run.ExitCode == 2, string.Join(' ', withFlag) + "\n" + run);
