@@ -77,6 +77,11 @@ public sealed class GitSource : IDisposable
         try
         {
             source.Materialize(repoPath, required: true);
+            if (source.LinkInRevision(repoPath) is { } link)
+            {
+                // what cat-file handed over is the link's target text, not a file
+                throw new UsageException($"error {LoadDiff.Formats.Diagnostics.Codes.OutsideFolder}: '{Printable(operand)}': '{link}' is stored in revision '{revision}' as a symbolic link; links in a revision are never followed");
+            }
         }
         catch
         {
@@ -160,15 +165,44 @@ public sealed class GitSource : IDisposable
         }
     }
 
-    private void PrepareReferenced(string fullPath)
+    private string? PrepareReferenced(string fullPath)
     {
         string root = Path.GetFullPath(_snapshot).TrimEnd(Path.DirectorySeparatorChar) + Path.DirectorySeparatorChar;
         string full = Path.GetFullPath(fullPath);
         if (!full.StartsWith(root, StringComparison.Ordinal) || File.Exists(full))
         {
-            return; // outside the repository: it does not exist in the revision, and the reader says so
+            return null; // outside the repository: it does not exist in the revision, and the reader says so
         }
-        Materialize(full[root.Length..].Replace(Path.DirectorySeparatorChar, '/'), required: false);
+        string repoPath = full[root.Length..].Replace(Path.DirectorySeparatorChar, '/');
+        if (LinkInRevision(repoPath) is { } link)
+        {
+            return $"escapes through a symbolic link: '{link}' is stored in revision '{_revision}' as a symbolic link, "
+                + "and links in a revision are never followed (not even with --allow-outside)";
+        }
+        Materialize(repoPath, required: false);
+        return null;
+    }
+
+    // The first component of the path (from the top of the repository) that the revision stores as a symbolic link
+    // (mode 120000), or null. git cat-file would hand over a link's target text as if it were the file, and a path
+    // through a linked folder does not exist in the tree; neither is ever followed to the working tree or elsewhere.
+    private string? LinkInRevision(string repoPath)
+    {
+        string[] parts = repoPath.Split('/');
+        for (int k = 1; k <= parts.Length; k++)
+        {
+            string prefix = string.Join('/', parts[..k]);
+            string entry = Text(Run(["ls-tree", "-z", "--full-tree", _revision, "--", prefix], Operand));
+            if (entry.Length == 0)
+            {
+                return null; // absent from the revision: the reader reports it missing
+            }
+            if (entry.StartsWith("120000 ", StringComparison.Ordinal))
+            {
+                return prefix;
+            }
+        }
+        return null;
     }
 
     private void Materialize(string repoPath, bool required)
@@ -229,6 +263,7 @@ public sealed class GitSource : IDisposable
     private static byte[] Run(string[] args, string operand)
     {
         var psi = new ProcessStartInfo("git") { RedirectStandardOutput = true, RedirectStandardError = true, UseShellExecute = false };
+        psi.Environment["GIT_LITERAL_PATHSPECS"] = "1"; // a path is a name, never a pattern
         foreach (string a in args)
         {
             psi.ArgumentList.Add(a);

@@ -21,7 +21,7 @@ public sealed record ReadOptions
     /// <summary>True when <see cref="CsvUnits"/> was set, so the header of a CSV given directly reports its units as stated.</summary>
     internal bool CsvUnitsGiven => _csvUnits is not null;
 
-    /// <summary>Accept referenced files outside the model's folder (absolute paths or <c>..</c>).</summary>
+    /// <summary>Accept referenced files outside the model's folder (absolute paths, <c>..</c>, or symbolic links that lead out).</summary>
     public bool AllowOutside { get; init; }
 
     /// <summary>Unknown fields are errors instead of warnings.</summary>
@@ -66,9 +66,11 @@ public sealed record ReadOptions
     /// <summary>
     /// Called with the full path of every file a load description references, before the reader checks that it exists:
     /// a caller reading a document from somewhere other than the working tree (a git revision) creates the file there
-    /// from the same source, so no referenced file is ever read from elsewhere. Null for plain files.
+    /// from the same source, so no referenced file is ever read from elsewhere. It returns null, or why the file must
+    /// not be read (the reader refuses it with LD050 at the reference; a symbolic link stored in a revision is never
+    /// followed). Null for plain files.
     /// </summary>
-    public Action<string>? PrepareReferencedFile { get; init; }
+    public Func<string, string?>? PrepareReferencedFile { get; init; }
 
     /// <summary>
     /// When set, a mesh or forces item whose referenced file does not exist is kept without its data (it carries no

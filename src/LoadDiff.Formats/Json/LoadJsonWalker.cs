@@ -426,7 +426,16 @@ internal sealed class LoadJsonWalker
             throw Error(node, path, Codes.OutsideFolder,
                 $"'{rel}' lies outside the folder of the load file; only relative paths inside it are read (--allow-outside permits others)");
         }
-        _options.PrepareReferencedFile?.Invoke(full);
+        if (_options.PrepareReferencedFile?.Invoke(full) is { } refused)
+        {
+            throw Error(node, path, Codes.OutsideFolder, $"'{rel}' {refused}");
+        }
+        // the lexical test above cannot see links: a link, or a linked folder on the way, may still lead out
+        if (!_options.AllowOutside && !_options.ReferencedFilesSkipped && !ReferencedPath.StaysInside(full, _baseDirectory))
+        {
+            throw Error(node, path, Codes.OutsideFolder,
+                $"'{rel}' escapes the folder of the load file through a symbolic link; only files inside it are read (--allow-outside permits others)");
+        }
         return (full, rel);
     }
 
