@@ -419,6 +419,11 @@ internal sealed class LoadJsonWalker
         {
             throw Error(node, path, Codes.ReferencedFileMissing, "the file name is empty");
         }
+        if (LoadDiff.Core.Text.NameCharacters.FirstForbidden(rel) is int bad and >= 0)
+        {
+            // no file system can name a file with a NUL, and a control character in a name is a forgery waiting to be printed
+            throw Error(node, path, Codes.InvalidId, LoadDiff.Core.Text.NameCharacters.Describe("the file name", rel, bad));
+        }
         string full = System.IO.Path.GetFullPath(System.IO.Path.Combine(_baseDirectory, rel));
         string baseFull = System.IO.Path.GetFullPath(_baseDirectory).TrimEnd(System.IO.Path.DirectorySeparatorChar) + System.IO.Path.DirectorySeparatorChar;
         if (!_options.AllowOutside && (System.IO.Path.IsPathRooted(rel) || !full.StartsWith(baseFull, StringComparison.Ordinal)))
