@@ -94,9 +94,17 @@ public static class InputFiles
             return Directory.Exists(path) ? Kind.Directory : File.Exists(path) ? Kind.Regular : Kind.Unknown;
         }
         var buffer = new byte[StatxSize];
-        if (Statx(AtWorkingDirectory, path, 0, StatxType, buffer) != 0)
+        try
         {
-            return Kind.Unknown;
+            if (Statx(AtWorkingDirectory, path, 0, StatxType, buffer) != 0)
+            {
+                return Kind.Unknown;
+            }
+        }
+        catch (Exception e) when (e is EntryPointNotFoundException or DllNotFoundException)
+        {
+            // a C library without statx (glibc before 2.28): fall back to what .NET can tell
+            return Directory.Exists(path) ? Kind.Directory : File.Exists(path) ? Kind.Regular : Kind.Unknown;
         }
         // struct statx (Linux uapi, the same on every architecture): stx_mode is the u16 at byte 28.
         int type = BitConverter.ToUInt16(buffer, 28) & 0xF000;

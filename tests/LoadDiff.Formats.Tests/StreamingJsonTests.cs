@@ -103,6 +103,10 @@ public class StreamingJsonTests
         { "NUL bytes", new string('\0', 300_000) },
         { "NUL after spaces", new string(' ', 100_000) + new string('\0', 300_000) },
         { "NUL after document", Doc + new string('\0', 300_000) },
+        // Strings longer than the buffer are valid wherever they stand: after ':' and after ',' with white space between.
+        { "long title after a colon", Doc.Replace("{ \"cases\"", "{ \"title\":   \"" + new string('t', 300_000) + "\", \"cases\"", StringComparison.Ordinal) },
+        { "long note after a comma", Doc.Replace("[0, 0, -1] }", "[0, 0, -1], \"note\": \"n\" ,\n  \"title\" : \"" + new string('n', 300_000) + "\" }", StringComparison.Ordinal) },
+        { "long key", Doc.Replace("{ \"cases\"", "{ \"" + new string('k', 300_000) + "\": 1, \"cases\"", StringComparison.Ordinal) },
     };
 
     private const string Doc = """{ "cases": { "a": { "loads": [ { "id": "p", "kind": "force", "at": [1, 2, 0], "value": [0, 0, -1] } ] } } }""";
@@ -118,6 +122,8 @@ public class StreamingJsonTests
         ReadResult whole = LoadFileReader.Read(path, a);
         ReadResult streamed = LoadFileReader.Read(path, b, Streamed);
         Assert.True(whole.Succeeded == streamed.Succeeded, what);
+        // every case is valid JSON but the errors and the NUL bytes (JSON grammar, RFC 8259)
+        Assert.Equal(!what.Contains("error", StringComparison.Ordinal) && !what.Contains("NUL", StringComparison.Ordinal), whole.Succeeded);
         Assert.Equal(whole.Diagnostics.Select(Describe), streamed.Diagnostics.Select(Describe));
         Assert.Equal(a.Cases.SelectMany(c => c.Items), b.Cases.SelectMany(c => c.Items));
     }

@@ -145,6 +145,21 @@ internal sealed class JsonTokenPump : IDisposable
         return i;
     }
 
+    // Where the pending token's value begins: past white space and one separator the reader may not have consumed yet.
+    private int ValueStart()
+    {
+        int i = FirstNonWhiteSpace();
+        if (i < _end - 1 && _buffer[i] is (byte)',' or (byte)':')
+        {
+            i++;
+            while (i < _end - 1 && _buffer[i] is (byte)' ' or (byte)'\t' or (byte)'\r' or (byte)'\n')
+            {
+                i++;
+            }
+        }
+        return i;
+    }
+
     private void ThrowIfMalformed()
     {
         var probe = new Utf8JsonReader(_buffer.AsSpan(_start, _end - _start), isFinalBlock: true, _state);
@@ -175,7 +190,7 @@ internal sealed class JsonTokenPump : IDisposable
             _start = _end = 0;
             _dropped = true;
         }
-        else if (_end == _buffer.Length && _buffer[FirstNonWhiteSpace()] != (byte)'"')
+        else if (_end == _buffer.Length && _buffer[ValueStart()] != (byte)'"')
         {
             // Only a string can be longer than the buffer; anything else that fills it is an error the reader finds at
             // once when told the text ends here (a file of NUL bytes, say) — reported instead of read to the end.
