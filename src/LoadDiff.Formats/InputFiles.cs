@@ -89,24 +89,11 @@ public static class InputFiles
     public static Kind KindOf(string path)
     {
         ArgumentNullException.ThrowIfNull(path);
-        if (!OperatingSystem.IsLinux())
+        byte[]? buffer = StatusOf(path);
+        if (buffer is null)
         {
-            return Directory.Exists(path) ? Kind.Directory : File.Exists(path) ? Kind.Regular : Kind.Unknown;
+            return !Path.Exists(path) ? Kind.Unknown : Directory.Exists(path) ? Kind.Directory : Kind.Regular;
         }
-        var buffer = new byte[StatxSize];
-        try
-        {
-            if (Statx(AtWorkingDirectory, path, 0, StatxType, buffer) != 0)
-            {
-                return Kind.Unknown;
-            }
-        }
-        catch (Exception e) when (e is EntryPointNotFoundException or DllNotFoundException)
-        {
-            // a C library without statx (glibc before 2.28): fall back to what .NET can tell
-            return Directory.Exists(path) ? Kind.Directory : File.Exists(path) ? Kind.Regular : Kind.Unknown;
-        }
-        // struct statx (Linux uapi, the same on every architecture): stx_mode is the u16 at byte 28.
         int type = BitConverter.ToUInt16(buffer, 28) & 0xF000;
         return type switch
         {
@@ -118,6 +105,42 @@ public static class InputFiles
             0xC000 => Kind.Socket,
             _ => Kind.Unknown,
         };
+    }
+
+    /// <summary>
+    /// The device, inode number and link count of the file <paramref name="path"/> names (links followed): two names with
+    /// the same device and inode are one file. Null when it does not exist or the platform cannot tell (not Linux).
+    /// </summary>
+    public static (ulong Device, ulong Inode, uint Links)? IdentityOf(string path)
+    {
+        ArgumentNullException.ThrowIfNull(path);
+        byte[]? buffer = StatusOf(path);
+        if (buffer is null)
+        {
+            return null;
+        }
+        ulong device = ((ulong)BitConverter.ToUInt32(buffer, 136) << 32) | BitConverter.ToUInt32(buffer, 140);
+        return (device, BitConverter.ToUInt64(buffer, 32), BitConverter.ToUInt32(buffer, 16));
+    }
+
+    // struct statx (Linux uapi, the same layout on every architecture): stx_nlink u32 at byte 16, stx_mode u16 at 28,
+    // stx_ino u64 at 32, stx_dev_major and stx_dev_minor u32 at 136 and 140. Null off Linux, for a missing file, and
+    // with a C library that has no statx (glibc before 2.28).
+    private static byte[]? StatusOf(string path)
+    {
+        if (!OperatingSystem.IsLinux() || path.Contains('\0', StringComparison.Ordinal))
+        {
+            return null;
+        }
+        var buffer = new byte[StatxSize];
+        try
+        {
+            return Statx(AtWorkingDirectory, path, 0, StatxBasicStats, buffer) == 0 ? buffer : null;
+        }
+        catch (Exception e) when (e is EntryPointNotFoundException or DllNotFoundException)
+        {
+            return null;
+        }
     }
 
     /// <summary>
@@ -204,7 +227,7 @@ public static class InputFiles
         new(new Diagnostic(Codes.FileUnreadable, Severity.Error, message, new SourceLocation(display.Replace("\0", "\\0", StringComparison.Ordinal))));
 
     private const int AtWorkingDirectory = -100;
-    private const uint StatxType = 0x1; // STATX_TYPE
+    private const uint StatxBasicStats = 0x7FF; // STATX_BASIC_STATS: type, mode, links, ids, inode, size, blocks, times
     private const int StatxSize = 256;
 
     [DllImport("libc", EntryPoint = "statx")]

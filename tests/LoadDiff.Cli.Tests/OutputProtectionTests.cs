@@ -120,6 +120,23 @@ public class OutputProtectionTests
         Assert.Empty(Directory.GetFiles(t.Path, "*.tmp", SearchOption.AllDirectories));
     }
 
+    // fmt --write refuses the file (LD081, naming the option, every file in the folder unchanged), then with the option
+    // rewrites it in canonical form.
+    private static void RefusedUnlessTold(string folder, string f, string option)
+    {
+        Dictionary<string, byte[]> before = Snapshot(folder);
+        CliRun refused = CliProcess.Run("fmt", "--write", f);
+        Assert.True(refused.ExitCode == 2, refused.ToString());
+        string line = Assert.Single(refused.StderrLines);
+        Assert.Contains("LD081", line);
+        Assert.Contains(option, line);
+        AssertSame(before, folder);
+
+        CliRun allowed = CliProcess.Run("fmt", "--write", option, f);
+        Assert.True(allowed.ExitCode == 0, allowed.ToString());
+        Assert.Contains("\"value\": [0, 0, -1000]", File.ReadAllText(f));
+    }
+
     [Fact]
     public void Fmt_write_refuses_a_read_only_file_unless_told()
     {
@@ -127,18 +144,7 @@ public class OutputProtectionTests
         string f = t.Write("ro.loads.json", Messy);
         const UnixFileMode readOnly = UnixFileMode.UserRead | UnixFileMode.GroupRead | UnixFileMode.OtherRead; // 0444
         File.SetUnixFileMode(f, readOnly);
-        Dictionary<string, byte[]> before = Snapshot(t.Path);
-
-        CliRun refused = CliProcess.Run("fmt", "--write", f);
-        Assert.True(refused.ExitCode == 2, refused.ToString());
-        string line = Assert.Single(refused.StderrLines);
-        Assert.Contains("LD081", line);
-        Assert.Contains("--replace-read-only", line);
-        AssertSame(before, t.Path);
-
-        CliRun allowed = CliProcess.Run("fmt", "--write", "--replace-read-only", f);
-        Assert.True(allowed.ExitCode == 0, allowed.ToString());
-        Assert.Contains("\"value\": [0, 0, -1000]", File.ReadAllText(f));
+        RefusedUnlessTold(t.Path, f, "--replace-read-only");
         Assert.Equal(readOnly, File.GetUnixFileMode(f));
     }
 
@@ -149,18 +155,7 @@ public class OutputProtectionTests
         string f = t.Write("a.loads.json", Messy);
         string other = Path.Combine(t.Path, "b.loads.json");
         HardLink(f, other);
-        Dictionary<string, byte[]> before = Snapshot(t.Path);
-
-        CliRun refused = CliProcess.Run("fmt", "--write", f);
-        Assert.True(refused.ExitCode == 2, refused.ToString());
-        string line = Assert.Single(refused.StderrLines);
-        Assert.Contains("LD081", line);
-        Assert.Contains("--split-hard-links", line);
-        AssertSame(before, t.Path);
-
-        CliRun allowed = CliProcess.Run("fmt", "--write", "--split-hard-links", f);
-        Assert.True(allowed.ExitCode == 0, allowed.ToString());
-        Assert.Contains("\"value\": [0, 0, -1000]", File.ReadAllText(f));
+        RefusedUnlessTold(t.Path, f, "--split-hard-links");
         Assert.Equal(Messy, File.ReadAllText(other)); // the other name keeps the old content, as the option says
     }
 
