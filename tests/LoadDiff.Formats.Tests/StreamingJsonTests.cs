@@ -103,6 +103,10 @@ public class StreamingJsonTests
         { "NUL bytes", new string('\0', 300_000) },
         { "NUL after spaces", new string(' ', 100_000) + new string('\0', 300_000) },
         { "NUL after document", Doc + new string('\0', 300_000) },
+        // White space after a separator (the reader holds the ',' or ':' until the next token arrives).
+        { "spaces after a comma", Doc.Replace("[0, 0, -1] }", "[0, 0, -1] }," + new string(' ', 300_000) + "\n { \"id\": \"q\", \"kind\": \"force\", \"at\": [4, 0, 0], \"value\": [0, 0, -5] }", StringComparison.Ordinal) },
+        { "lines after a colon", Doc.Replace("\"value\":", "\"value\":" + string.Concat(Enumerable.Repeat(" \r\n", 100_000)), StringComparison.Ordinal) },
+        { "error after a comma and spaces", Doc.Replace("[0, 0, -1] }", "[0, 0, -1] }," + new string(' ', 300_000) + "  ]", StringComparison.Ordinal) },
         // Strings longer than the buffer are valid wherever they stand: after ':' and after ',' with white space between.
         { "long title after a colon", Doc.Replace("{ \"cases\"", "{ \"title\":   \"" + new string('t', 300_000) + "\", \"cases\"", StringComparison.Ordinal) },
         { "long note after a comma", Doc.Replace("[0, 0, -1] }", "[0, 0, -1], \"note\": \"n\" ,\n  \"title\" : \"" + new string('n', 300_000) + "\" }", StringComparison.Ordinal) },

@@ -145,6 +145,23 @@ internal sealed class JsonTokenPump : IDisposable
         return i;
     }
 
+    private byte? SeparatorThenWhiteSpace()
+    {
+        int i = FirstNonWhiteSpace();
+        if (i >= _end || _buffer[i] is not ((byte)',' or (byte)':'))
+        {
+            return null;
+        }
+        for (int j = i + 1; j < _end; j++)
+        {
+            if (_buffer[j] is not ((byte)' ' or (byte)'\t' or (byte)'\r' or (byte)'\n'))
+            {
+                return null;
+            }
+        }
+        return _buffer[i];
+    }
+
     // Where the pending token's value begins: past white space and one separator the reader may not have consumed yet.
     private int ValueStart()
     {
@@ -188,6 +205,16 @@ internal sealed class JsonTokenPump : IDisposable
             // A buffer of nothing but white space between tokens: drop it rather than grow, so padding costs no memory.
             _bufferOffset += _end;
             _start = _end = 0;
+            _dropped = true;
+        }
+        else if (_end == _buffer.Length && SeparatorThenWhiteSpace() is byte separator)
+        {
+            // A ',' or ':' the reader keeps until the next token, then only white space: keep the separator alone, as
+            // the last byte read, so that the bytes still to come keep their offsets.
+            _bufferOffset += _end - 1;
+            _buffer[0] = separator;
+            _start = 0;
+            _end = 1;
             _dropped = true;
         }
         else if (_end == _buffer.Length && _buffer[ValueStart()] != (byte)'"')
